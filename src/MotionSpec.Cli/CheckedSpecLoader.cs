@@ -24,7 +24,7 @@ internal static class CheckedSpecLoader
 
         var checkedSpec = SpecCompiler.Check(path, bytes);
         var diagnostics = new DiagnosticWriter(stderr, format);
-        diagnostics.Add(path, checkedSpec.Source, bytes, checkedSpec.Diagnostics);
+        diagnostics.Add(path, checkedSpec.Source, checkedSpec.Diagnostics);
         diagnostics.Complete();
         if (checkedSpec.HasErrors)
         {

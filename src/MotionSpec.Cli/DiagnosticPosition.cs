@@ -1,33 +1,23 @@
-using System.Text;
+using MotionSpec.Language.Diagnostics;
 using MotionSpec.Language.Text;
 
 namespace MotionSpec.Cli;
 
 /// <summary>
-/// Turns a diagnostic's span into the lines and columns people see. With decoded text the source's own line
-/// map answers. Without it (the bytes were not UTF-8) the span counts bytes of the file, so the valid text
-/// before the offset is decoded and measured the same way.
+/// Turns a diagnostic's span into the lines and columns people see. The text a diagnostic points into is its
+/// own <see cref="Diagnostic.Source"/> when the stage set it (for a file that did not decode, the valid text
+/// before the bad byte), else the spec's decoded text.
 /// </summary>
 internal static class DiagnosticPosition
 {
-    private static readonly UTF8Encoding LenientUtf8 = new(encoderShouldEmitUTF8Identifier: false, throwOnInvalidBytes: false);
+    private static readonly LinePosition FileStart = new(1, 1);
 
-    /// <summary>Start (inclusive) and end (exclusive) of a span.</summary>
-    public static (LinePosition Start, LinePosition End) Locate(SourceText? source, ReadOnlySpan<byte> bytes, TextSpan span)
+    /// <summary>Start (inclusive) and end (exclusive) of a diagnostic; the file's start when no text is known.</summary>
+    public static (LinePosition Start, LinePosition End) Locate(Diagnostic diagnostic, SourceText? specSource)
     {
-        if (source is not null)
-        {
-            return (source.GetLinePosition(span.Start), source.GetLinePosition(span.End));
-        }
-
-        return (FromByteOffset(bytes, span.Start), FromByteOffset(bytes, span.End));
-    }
-
-    private static LinePosition FromByteOffset(ReadOnlySpan<byte> bytes, int offset)
-    {
-        offset = Math.Clamp(offset, 0, bytes.Length);
-        var bom = bytes.StartsWith(Encoding.UTF8.Preamble) ? Encoding.UTF8.Preamble.Length : 0;
-        var prefix = offset > bom ? LenientUtf8.GetString(bytes[bom..offset]) : string.Empty;
-        return new SourceText(string.Empty, prefix).GetLinePosition(prefix.Length);
+        var source = diagnostic.Source ?? specSource;
+        return source is null
+            ? (FileStart, FileStart)
+            : (source.GetLinePosition(diagnostic.Span.Start), source.GetLinePosition(diagnostic.Span.End));
     }
 }

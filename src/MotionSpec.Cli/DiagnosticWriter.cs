@@ -27,8 +27,11 @@ internal sealed class DiagnosticWriter(TextWriter stderr, DiagnosticFormat forma
     /// <summary>Warnings seen so far, over all files.</summary>
     public int WarningCount { get; private set; }
 
-    /// <summary>Adds the diagnostics of one file; <paramref name="file"/> is the path as the user wrote it.</summary>
-    public void Add(string file, SourceText? source, ReadOnlySpan<byte> bytes, IEnumerable<Diagnostic> diagnostics)
+    /// <summary>
+    /// Adds the diagnostics of one file; <paramref name="file"/> is the path as the user wrote it and
+    /// <paramref name="source"/> the spec's text, for diagnostics that do not carry their own.
+    /// </summary>
+    public void Add(string file, SourceText? source, IEnumerable<Diagnostic> diagnostics)
     {
         foreach (var diagnostic in diagnostics)
         {
@@ -41,7 +44,7 @@ internal sealed class DiagnosticWriter(TextWriter stderr, DiagnosticFormat forma
                 WarningCount++;
             }
 
-            var (start, end) = DiagnosticPosition.Locate(source, bytes, diagnostic.Span);
+            var (start, end) = DiagnosticPosition.Locate(diagnostic, source);
             if (format == DiagnosticFormat.Json)
             {
                 _pending.Add((file, diagnostic, start, end));

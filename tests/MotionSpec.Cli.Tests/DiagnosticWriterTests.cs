@@ -7,11 +7,11 @@ namespace MotionSpec.Cli.Tests;
 /// <summary>The printing of diagnostics on its own, with hand-made diagnostics over known text.</summary>
 public sealed class DiagnosticWriterTests
 {
-    private static string Print(DiagnosticFormat format, string file, SourceText source, params Diagnostic[] diagnostics)
+    private static string Print(DiagnosticFormat format, string file, SourceText? source, params Diagnostic[] diagnostics)
     {
         using var stderr = new StringWriter();
         var writer = new DiagnosticWriter(stderr, format);
-        writer.Add(file, source, default, diagnostics);
+        writer.Add(file, source, diagnostics);
         writer.Complete();
         return stderr.ToString();
     }
@@ -80,11 +80,34 @@ public sealed class DiagnosticWriterTests
         using var stderr = new StringWriter();
         var writer = new DiagnosticWriter(stderr, DiagnosticFormat.Text);
 
-        writer.Add("a.motion", source, default, [new Diagnostic("MOT1001", DiagnosticSeverity.Error, new TextSpan(0, 1), "e")]);
-        writer.Add("b.motion", source, default, [new Diagnostic("MOT2901", DiagnosticSeverity.Warning, new TextSpan(0, 1), "w"), new Diagnostic("MOT2902", DiagnosticSeverity.Warning, new TextSpan(0, 1), "w")]);
+        writer.Add("a.motion", source, [new Diagnostic("MOT1001", DiagnosticSeverity.Error, new TextSpan(0, 1), "e")]);
+        writer.Add("b.motion", source, [new Diagnostic("MOT2901", DiagnosticSeverity.Warning, new TextSpan(0, 1), "w"), new Diagnostic("MOT2902", DiagnosticSeverity.Warning, new TextSpan(0, 1), "w")]);
 
         Assert.Equal(1, writer.ErrorCount);
         Assert.Equal(2, writer.WarningCount);
+    }
+
+    [Fact]
+    public void A_diagnostic_carrying_its_own_text_is_located_in_that_text()
+    {
+        var spec = new SourceText("a.motion", "frame quay\n");
+        var own = new SourceText("a.motion", "line one\nline two");
+        var error = new Diagnostic("MOT1001", DiagnosticSeverity.Error, new TextSpan(14, 0), "bad byte") { Source = own };
+
+        var text = Print(DiagnosticFormat.Text, "a.motion", spec, error);
+
+        Assert.Equal("a.motion(2,6): error MOT1001: bad byte" + Environment.NewLine, text);
+    }
+
+    [Fact]
+    public void Without_any_text_the_diagnostic_is_placed_at_the_start_of_the_file()
+    {
+        using var stderr = new StringWriter();
+        var writer = new DiagnosticWriter(stderr, DiagnosticFormat.Text);
+
+        writer.Add("big.motion", null, [new Diagnostic("MOT1002", DiagnosticSeverity.Error, new TextSpan(0, 0), "too large")]);
+
+        Assert.Equal("big.motion(1,1): error MOT1002: too large" + Environment.NewLine, stderr.ToString());
     }
 
     [Fact]

@@ -43,7 +43,7 @@ internal static class CheckCommand
         for (var i = 0; i < paths.Count; i++)
         {
             var spec = SpecCompiler.Check(paths[i], contents[i]);
-            diagnostics.Add(paths[i], spec.Source, contents[i], spec.Diagnostics);
+            diagnostics.Add(paths[i], spec.Source, spec.Diagnostics);
             anyErrors |= spec.HasErrors;
         }
 
