@@ -133,9 +133,9 @@ public sealed class CheckExitCodeTests : IDisposable
 
         Assert.Equal(ExitCodes.SpecErrors, run.ExitCode);
         Assert.DoesNotContain(run.StderrLines, l => l.StartsWith(clean, StringComparison.Ordinal));
-        Assert.StartsWith(bad + "(4,16): error MOT2", run.StderrLines[0], StringComparison.Ordinal);
-        Assert.StartsWith(worse + "(2,7): error MOT2", run.StderrLines[1], StringComparison.Ordinal);
-        Assert.StartsWith(worse + "(3,13): error MOT3", run.StderrLines[2], StringComparison.Ordinal);
+        Assert.StartsWith(bad + "(4,16): error MOT2203: ", run.StderrLines[0], StringComparison.Ordinal);
+        Assert.StartsWith(worse + "(2,7): error MOT2202: ", run.StderrLines[1], StringComparison.Ordinal);
+        Assert.StartsWith(worse + "(3,13): error MOT3001: ", run.StderrLines[2], StringComparison.Ordinal);
         Assert.Equal(3, run.StderrLines.Length);
     }
 }

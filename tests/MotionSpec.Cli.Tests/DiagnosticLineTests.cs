@@ -30,7 +30,7 @@ public sealed partial class DiagnosticLineTests : IDisposable
         Assert.Equal("4", match.Groups["line"].Value);
         Assert.Equal("16", match.Groups["col"].Value);
         Assert.Equal("error", match.Groups["severity"].Value);
-        Assert.StartsWith("MOT2", match.Groups["code"].Value, StringComparison.Ordinal);
+        Assert.Equal("MOT2203", match.Groups["code"].Value);
         Assert.Contains("'trolley'", match.Groups["message"].Value, StringComparison.Ordinal);
     }
 
@@ -56,7 +56,7 @@ public sealed partial class DiagnosticLineTests : IDisposable
 
         var run = CliRun.Of("check", spec);
 
-        Assert.StartsWith(spec + "(4,16): error MOT2", Assert.Single(run.StderrLines), StringComparison.Ordinal);
+        Assert.StartsWith(spec + "(4,16): error MOT2203: ", Assert.Single(run.StderrLines), StringComparison.Ordinal);
     }
 
     [Theory]
@@ -82,6 +82,6 @@ public sealed partial class DiagnosticLineTests : IDisposable
 
         var run = CliRun.Of("check", spec);
 
-        Assert.StartsWith(spec + "(5,16): error MOT2", Assert.Single(run.StderrLines), StringComparison.Ordinal);
+        Assert.StartsWith(spec + "(5,16): error MOT2203: ", Assert.Single(run.StderrLines), StringComparison.Ordinal);
     }
 }

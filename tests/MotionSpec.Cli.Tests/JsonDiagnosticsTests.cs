@@ -53,7 +53,7 @@ public sealed class JsonDiagnosticsTests : IDisposable
         Assert.Equal(16, item.GetProperty("column").GetInt32());
         Assert.Equal(4, item.GetProperty("endLine").GetInt32());
         Assert.Equal(16 + "trolly".Length, item.GetProperty("endColumn").GetInt32());
-        Assert.StartsWith("MOT2", item.GetProperty("code").GetString(), StringComparison.Ordinal);
+        Assert.Equal("MOT2203", item.GetProperty("code").GetString());
         Assert.Contains("'trolley'", item.GetProperty("message").GetString(), StringComparison.Ordinal);
     }
 

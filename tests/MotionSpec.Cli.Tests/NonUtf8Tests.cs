@@ -22,7 +22,7 @@ public sealed class NonUtf8Tests : IDisposable
         var run = CliRun.Of("check", spec);
 
         Assert.Equal(ExitCodes.SpecErrors, run.ExitCode);
-        Assert.StartsWith(spec + "(2,20): error MOT1", run.StderrLines[0], StringComparison.Ordinal);
+        Assert.StartsWith(spec + "(2,20): error MOT1001: ", run.StderrLines[0], StringComparison.Ordinal);
     }
 
     [Fact]
@@ -40,7 +40,7 @@ public sealed class NonUtf8Tests : IDisposable
         var first = json.RootElement[0];
         Assert.Equal(1, first.GetProperty("line").GetInt32());
         Assert.Equal(7, first.GetProperty("column").GetInt32());
-        Assert.StartsWith("MOT1", first.GetProperty("code").GetString(), StringComparison.Ordinal);
+        Assert.Equal("MOT1001", first.GetProperty("code").GetString());
     }
 
     [Fact]
@@ -52,6 +52,6 @@ public sealed class NonUtf8Tests : IDisposable
         var run = CliRun.Of("check", spec);
 
         Assert.Equal(ExitCodes.SpecErrors, run.ExitCode);
-        Assert.StartsWith(spec + "(1,4): error MOT1", run.StderrLines[0], StringComparison.Ordinal);
+        Assert.StartsWith(spec + "(1,4): error MOT1001: ", run.StderrLines[0], StringComparison.Ordinal);
     }
 }

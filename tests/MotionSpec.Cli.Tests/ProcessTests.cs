@@ -52,7 +52,7 @@ public sealed class ProcessTests : IDisposable
 
         Assert.Equal(1, run.ExitCode);
         Assert.Equal(string.Empty, run.Stdout);
-        Assert.StartsWith(spec + "(4,16): error MOT2", run.Stderr, StringComparison.Ordinal);
+        Assert.StartsWith(spec + "(4,16): error MOT2203: ", run.Stderr, StringComparison.Ordinal);
     }
 
     [Fact]
