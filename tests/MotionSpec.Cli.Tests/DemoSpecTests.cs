@@ -32,15 +32,4 @@ public sealed class DemoSpecTests
         Assert.Equal(string.Empty, run.Stderr);
         Assert.Equal(ExitCodes.Success, run.ExitCode);
     }
-
-    [Fact]
-    public void All_demo_specs_check_clean_in_one_run()
-    {
-        var paths = Directory.GetFiles(Path.Combine(RepoRoot.Find(), "specs-demo"), "*.motion");
-
-        var run = CliRun.Of(["check", .. paths]);
-
-        Assert.Equal(string.Empty, run.Stderr);
-        Assert.Equal(ExitCodes.Success, run.ExitCode);
-    }
 }
