@@ -68,4 +68,25 @@ public sealed class JsonDiagnosticsTests : IDisposable
         using var json = JsonDocument.Parse(run.Stderr);
         Assert.Equal(0, json.RootElement.GetArrayLength());
     }
+
+    [Fact]
+    public void Same_input_gives_the_same_bytes()
+    {
+        var worse = _folder.Write("c.motion", Specs.TwoErrors);
+
+        var first = CliRun.Of("check", "--diagnostics", "json", worse);
+        var second = CliRun.Of("check", "--diagnostics", "json", worse);
+
+        Assert.Equal(first.Stderr, second.Stderr);
+    }
+
+    [Fact]
+    public void Unreadable_file_is_a_plain_message_and_exit_2_not_json()
+    {
+        // Decided: a command-line failure is not a diagnostic of any spec, so no array is printed.
+        var run = CliRun.Of("check", "--diagnostics", "json", "missing.motion");
+
+        Assert.Equal(ExitCodes.Usage, run.ExitCode);
+        Assert.Equal("motionspec: cannot read 'missing.motion': no such file", Assert.Single(run.StderrLines));
+    }
 }
