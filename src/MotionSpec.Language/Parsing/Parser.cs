@@ -20,8 +20,10 @@ internal static class Parser
         var segments = Segments(tokens);
         OpenFrame? open = null;
 
-        foreach (var (start, count) in segments)
+        for (var index = 0; index < segments.Count; index++)
         {
+            var (start, count) = segments[index];
+            var regionEnd = index + 1 < segments.Count ? tokens[segments[index + 1].Start].Span.Position.Absolute : text.Length;
             var first = tokens[start];
             var firstSpan = SpanOf(first);
             if (first.Kind == MotionToken.LeftBrace)
@@ -86,7 +88,7 @@ internal static class Parser
                 open = Finish(open, statements);
                 diagnostics.Error(LanguageDiagnosticCodes.MisplacedFrameItem, firstSpan,
                     $"'{first.ToStringValue()}' belongs inside a frame's block: frame NAME in PARENT {{ {first.ToStringValue()} ... }}");
-                ParseSegment(text, tokens, start, count, lexicalErrors, diagnostics);
+                ParseSegment(tokens, start, count, regionEnd, lexicalErrors, diagnostics);
                 continue;
             }
 
@@ -97,7 +99,7 @@ internal static class Parser
                 continue;
             }
 
-            var node = ParseSegment(text, tokens, start, count, lexicalErrors, diagnostics);
+            var node = ParseSegment(tokens, start, count, regionEnd, lexicalErrors, diagnostics);
             switch (node)
             {
                 case FrameItemSyntax item:
@@ -140,7 +142,7 @@ internal static class Parser
         return null;
     }
 
-    private static SyntaxNode? ParseSegment(string text, Token<MotionToken>[] tokens, int start, int count, IReadOnlyList<LexicalError> lexicalErrors, DiagnosticBag diagnostics)
+    private static SyntaxNode? ParseSegment(Token<MotionToken>[] tokens, int start, int count, int regionEnd, IReadOnlyList<LexicalError> lexicalErrors, DiagnosticBag diagnostics)
     {
         var segmentStart = tokens[start].Span.Position.Absolute;
         var last = tokens[start + count - 1];
@@ -169,7 +171,9 @@ internal static class Parser
             return result.Value;
         }
 
-        var explained = lexicalErrors.Any(e => e.Span.Start >= segmentStart && e.Span.Start < segmentEnd);
+        // A bad character or literal in this statement's stretch of text (up to the next statement) already says
+        // what is wrong; a second, derived syntax error would only confuse.
+        var explained = lexicalErrors.Any(e => e.Span.Start >= segmentStart && e.Span.Start < regionEnd);
         if (!explained)
         {
             var at = result.ErrorPosition.HasValue ? result.ErrorPosition.Absolute : segmentEnd;

@@ -109,7 +109,15 @@ internal static class TokenParsers
 
     /// <summary>Anything that binds tighter than <c>^</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Primary =
-        Number.Or(Time).Or(Pi).Or(NameOrUnitVector).Or(Call).Or(Parenthesized).Or(Bracket).Named("expression");
+        ByFirstToken(
+            "expression",
+            (MotionToken.Number, Number),
+            (MotionToken.Time, Time),
+            (MotionToken.Pi, Pi),
+            (MotionToken.Identifier, NameOrUnitVector),
+            (MotionToken.Function, Call),
+            (MotionToken.LeftParen, Parenthesized),
+            (MotionToken.LeftBracket, Bracket));
 
     /// <summary><c>a^b</c>, right-associative; the exponent may begin with unary minus (<c>x^-2</c>).</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Power =
@@ -232,9 +240,43 @@ internal static class TokenParsers
 
     /// <summary>One statement, which must use every token it is given.</summary>
     public static readonly TokenListParser<MotionToken, SyntaxNode> Statement =
-        Title.Or(Param).Or(Coord).Or(Let).Or(FrameHeader).Or(Rotate).Or(Origin).Or(Spin).Or(Point).Or(Report)
-            .Named("statement")
-            .AtEnd();
+        ByFirstToken(
+            "statement",
+            (MotionToken.Title, Title),
+            (MotionToken.Param, Param),
+            (MotionToken.Coord, Coord),
+            (MotionToken.Let, Let),
+            (MotionToken.Frame, FrameHeader),
+            (MotionToken.Rotate, Rotate),
+            (MotionToken.Origin, Origin),
+            (MotionToken.Spin, Spin),
+            (MotionToken.Point, Point),
+            (MotionToken.Report, Report))
+        .AtEnd();
+
+    /// <summary>
+    /// The same as trying each alternative in turn with <c>Or</c>, since each begins with its own token, but it
+    /// picks the one alternative directly: trying and failing allocates, and specs can have 100,000 statements.
+    /// </summary>
+    private static TokenListParser<MotionToken, T> ByFirstToken<T>(string expectation, params (MotionToken First, TokenListParser<MotionToken, T> Parser)[] alternatives)
+    {
+        var table = new TokenListParser<MotionToken, T>?[(int)MotionToken.Colon + 1];
+        foreach (var (first, parser) in alternatives)
+        {
+            table[(int)first] = parser;
+        }
+
+        return input =>
+        {
+            var next = input.ConsumeToken();
+            if (next.HasValue && table[(int)next.Value.Kind] is { } chosen)
+            {
+                return chosen(input);
+            }
+
+            return TokenListParserResult.Empty<MotionToken, T>(input, [expectation]);
+        };
+    }
 
     private static TokenListParser<MotionToken, T?> Optional<T>(TokenListParser<MotionToken, T> parser)
         where T : class => parser.Select(value => (T?)value).OptionalOrDefault();
