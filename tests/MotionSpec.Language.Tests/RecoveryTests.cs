@@ -23,7 +23,7 @@ public class RecoveryTests
                 rotate about x by q
             }
             point tip in hok at [0, 0, -L]
-            report tip in quay
+            report tipp in quay
             report hook in quay via boom
             """;
         var errors = Compile.Run(text).Diagnostics;
@@ -54,6 +54,20 @@ public class RecoveryTests
         var errors = Compile.Run("frame a\nframe b in {\n  origin at [1, 0, 0]\n}\nparam k = 1").Diagnostics;
         var d = Assert.Single(errors);
         Assert.Equal(C.SyntaxError, d.Code);
+    }
+
+    [Fact]
+    public void A_declaration_that_failed_to_parse_is_not_reported_again_where_it_is_used()
+    {
+        var errors = Compile.Run("param L = 18 m +\nframe a\nframe b in a {\n origin at [L, 0, 0]\n}\nframe c in\nframe d in c\nreport d in a").Diagnostics;
+        Assert.Equal([C.SyntaxError, C.SyntaxError], errors.Select(d => d.Code));
+    }
+
+    [Fact]
+    public void Syntax_errors_explain_common_slips()
+    {
+        Assert.Contains("no implicit multiplication", Compile.Expect("param a = 2\nparam b = (3) a", C.SyntaxError, 2, 15).Message);
+        Assert.Contains("order via, basis, as", Compile.Expect("frame a\nreport a in a basis a via a", C.SyntaxError, 2, 23).Message);
     }
 
     [Fact]

@@ -219,7 +219,7 @@ internal sealed class MotionTokenizer : Tokenizer<MotionToken>
     private static IEnumerable<Result<MotionToken>> LexUnitAfterNumber(string text, ref int position, int end, ref SpanOfText cursor)
     {
         var look = position;
-        while (look < end && (text[look] == ' ' || text[look] == '\t' || text[look] == '\r' || text[look] == '\n'))
+        while (look < end && (text[look] == ' ' || text[look] == '\t'))
         {
             look++;
         }

@@ -17,6 +17,7 @@ internal static class Parser
     public static SpecSyntax Parse(string text, Token<MotionToken>[] tokens, IReadOnlyList<LexicalError> lexicalErrors, DiagnosticBag diagnostics)
     {
         var statements = new List<StatementSyntax>();
+        var broken = new List<IdentifierSyntax>();
         var segments = Segments(tokens);
         OpenFrame? open = null;
 
@@ -100,6 +101,11 @@ internal static class Parser
             }
 
             var node = ParseSegment(tokens, start, count, regionEnd, lexicalErrors, diagnostics);
+            if (node is null && count > 1 && tokens[start + 1].Kind == MotionToken.Identifier && first.Kind is not (MotionToken.Report or MotionToken.Title))
+            {
+                broken.Add(new IdentifierSyntax(SpanOf(tokens[start + 1]), tokens[start + 1].ToStringValue()));
+            }
+
             switch (node)
             {
                 case FrameItemSyntax item:
@@ -126,7 +132,7 @@ internal static class Parser
 
         Finish(open, statements);
         var end = tokens.Length == 0 ? 0 : tokens[tokens.Length - 1].Span.Position.Absolute + tokens[tokens.Length - 1].Span.Length;
-        return new SpecSyntax(new TextSpan(0, end), statements);
+        return new SpecSyntax(new TextSpan(0, end), statements, broken);
     }
 
     private static OpenFrame? Finish(OpenFrame? open, List<StatementSyntax> statements)
@@ -193,17 +199,44 @@ internal static class Parser
                 length = 0;
             }
 
-            diagnostics.Error(LanguageDiagnosticCodes.SyntaxError, new TextSpan(at, length), Describe(result.FormatErrorMessageFragment(), tokens[start]));
+            diagnostics.Error(LanguageDiagnosticCodes.SyntaxError, new TextSpan(at, length), Describe(result.FormatErrorMessageFragment(), tokens, start, count, at));
         }
 
         return null;
     }
 
-    private static string Describe(string fragment, Token<MotionToken> keyword)
+    private static string Describe(string fragment, Token<MotionToken>[] tokens, int start, int count, int at)
     {
+        var keyword = tokens[start];
         var message = fragment.TrimEnd('.').Replace("end of input", "end of statement");
-        return $"in this '{keyword.ToStringValue()}' statement: {message}";
+        var hint = string.Empty;
+        for (var i = start + 1; i < start + count; i++)
+        {
+            if (tokens[i].Span.Position.Absolute != at)
+            {
+                continue;
+            }
+
+            var kind = tokens[i].Kind;
+            var previous = tokens[i - 1].Kind;
+            if (keyword.Kind == MotionToken.Report && kind is MotionToken.Via or MotionToken.Basis or MotionToken.As)
+            {
+                hint = "; the clauses of a report come in the order via, basis, as, each at most once";
+            }
+            else if (EndsOperand(previous) && kind is MotionToken.Identifier or MotionToken.Number or MotionToken.LeftParen
+                         or MotionToken.Function or MotionToken.Time or MotionToken.Pi or MotionToken.LeftBracket)
+            {
+                hint = "; there is no implicit multiplication: write '*' between the factors";
+            }
+
+            break;
+        }
+
+        return $"in this '{keyword.ToStringValue()}' statement: {message}{hint}";
     }
+
+    private static bool EndsOperand(MotionToken kind) => kind is MotionToken.Number or MotionToken.Unit or MotionToken.Identifier
+        or MotionToken.Mark or MotionToken.Time or MotionToken.Pi or MotionToken.RightParen or MotionToken.RightBracket;
 
     private static string Shorten(string text) => text.Length > 20 ? text.Remove(17) + "..." : text;
 
