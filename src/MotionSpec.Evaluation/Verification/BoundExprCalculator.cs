@@ -12,6 +12,7 @@ namespace MotionSpec.Evaluation.Verification;
 internal sealed class BoundExprCalculator
 {
     private readonly Dictionary<LetSymbol, double> _lets = [];
+    private readonly Dictionary<BoundNumber, double> _numbers = [];
     private readonly double[] _params;
     private readonly MotionState _base;
     private readonly Func<FrameSymbol, Mat3> _orientationOf;
@@ -54,7 +55,14 @@ internal sealed class BoundExprCalculator
         switch (e)
         {
             case BoundNumber n:
-                return n.Value.ToDouble();
+                // Exact constants convert through big integers; once per literal is enough.
+                if (!_numbers.TryGetValue(n, out var number))
+                {
+                    number = n.Value.ToDouble();
+                    _numbers[n] = number;
+                }
+
+                return number;
             case BoundTime:
                 return _time;
             case BoundParamReference p:

@@ -24,23 +24,25 @@ internal readonly struct Mat3
         6 => _m20, 7 => _m21, _ => _m22,
     };
 
-    public Vec3 Column(int column) => new(this[0, column], this[1, column], this[2, column]);
+    public Vec3 Column(int column) => column switch
+    {
+        0 => new(_m00, _m10, _m20),
+        1 => new(_m01, _m11, _m21),
+        _ => new(_m02, _m12, _m22),
+    };
 
     public Mat3 Transpose() => new(_m00, _m10, _m20, _m01, _m11, _m21, _m02, _m12, _m22);
 
-    public static Mat3 operator *(Mat3 a, Mat3 b)
-    {
-        Span<double> r = stackalloc double[9];
-        for (var i = 0; i < 3; i++)
-        {
-            for (var j = 0; j < 3; j++)
-            {
-                r[(i * 3) + j] = (a[i, 0] * b[0, j]) + (a[i, 1] * b[1, j]) + (a[i, 2] * b[2, j]);
-            }
-        }
-
-        return new Mat3(r[0], r[1], r[2], r[3], r[4], r[5], r[6], r[7], r[8]);
-    }
+    public static Mat3 operator *(Mat3 a, Mat3 b) => new(
+        (a._m00 * b._m00) + (a._m01 * b._m10) + (a._m02 * b._m20),
+        (a._m00 * b._m01) + (a._m01 * b._m11) + (a._m02 * b._m21),
+        (a._m00 * b._m02) + (a._m01 * b._m12) + (a._m02 * b._m22),
+        (a._m10 * b._m00) + (a._m11 * b._m10) + (a._m12 * b._m20),
+        (a._m10 * b._m01) + (a._m11 * b._m11) + (a._m12 * b._m21),
+        (a._m10 * b._m02) + (a._m11 * b._m12) + (a._m12 * b._m22),
+        (a._m20 * b._m00) + (a._m21 * b._m10) + (a._m22 * b._m20),
+        (a._m20 * b._m01) + (a._m21 * b._m11) + (a._m22 * b._m21),
+        (a._m20 * b._m02) + (a._m21 * b._m12) + (a._m22 * b._m22));
 
     public static Mat3 operator +(Mat3 a, Mat3 b) => Combine(a, 1, b, 1);
 
@@ -72,10 +74,9 @@ internal readonly struct Mat3
     /// <summary>The nine entries, row-major.</summary>
     public void CopyTo(Span<double> destination)
     {
-        for (var i = 0; i < 9; i++)
-        {
-            destination[i] = this[i / 3, i % 3];
-        }
+        destination[0] = _m00; destination[1] = _m01; destination[2] = _m02;
+        destination[3] = _m10; destination[4] = _m11; destination[5] = _m12;
+        destination[6] = _m20; destination[7] = _m21; destination[8] = _m22;
     }
 
     /// <summary>A matrix from nine entries, row-major.</summary>
