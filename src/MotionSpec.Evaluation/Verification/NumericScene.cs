@@ -13,7 +13,7 @@ internal sealed class NumericScene
 {
     // A fixed number of steps whatever the span: the integrated orientation is then a smooth function of the
     // instant whose first four derivatives at the base time are exact, so finite differences see no kink.
-    private const int SpinSteps = 16;
+    private const int SpinSteps = 8;
 
     private readonly BoundSpec _spec;
     private readonly BoundExprCalculator _calculator;
