@@ -14,7 +14,7 @@ internal sealed class RandomStates
     private readonly Random _random;
     private readonly double _length;
 
-    /// <param name="params">Every param's value (derived ones recomputed), as the closed-form path resolved them.</param>
+    // params: every param's value (derived ones recomputed), as the closed-form path resolved them.
     public RandomStates(BoundSpec spec, double[] @params, int seed)
     {
         _spec = spec;
