@@ -20,7 +20,7 @@ public sealed class NonFiniteTests
     {
         var checkedSpec = Specs.Check(Singular);
         var model = checkedSpec.Model!;
-        SettingParser.TryParse(model.Spec, ["q'=1"], out var inputs, out _);
+        SettingParser.TryParse(model.Spec, ["q=-1", "q'=1"], out var inputs, out _);
         var diagnostics = new DiagnosticBag();
         var run = ModelEvaluator.Compile(model).Prepare(inputs, new TimeSamples(-1, 0.5, 5), model.Spec.Reports, diagnostics)!;
 
@@ -32,7 +32,7 @@ public sealed class NonFiniteTests
         Assert.Equal((5, 3), (start.Line, start.Column));
         Assert.Contains("'pInBase'", error.Message, StringComparison.Ordinal);
 
-        // q(t) = q'(t - START) with q' = 1 and START = -1 s is zero at t = 0 s, the third sample.
+        // q(t) = q + q'(t - START) with q = -1, q' = 1 and START = -1 s is zero at t = 0 s, the third sample.
         Assert.Contains("t = 0 s", error.Message, StringComparison.Ordinal);
         Assert.Contains("position", error.Message, StringComparison.Ordinal);
     }

@@ -16,7 +16,6 @@ internal sealed class NumericReference
     private readonly BoundSpec _spec;
     private readonly int[] _offsets;
     private readonly int _size;
-    private readonly List<(int Start, int Length)> _groups = [];
 
     public NumericReference(BoundSpec spec)
     {
@@ -27,12 +26,10 @@ internal sealed class NumericReference
             _offsets[report.Index] = _size;
             if (report.Kind == ReportKind.Point)
             {
-                _groups.AddRange([(_size, 3), (_size + 3, 3), (_size + 6, 3), (_size + 9, 9)]);
                 _size += PointProbe;
             }
             else
             {
-                _groups.AddRange([(_size, 3), (_size + 3, 9)]);
                 _size += FrameProbe;
             }
         }
@@ -45,12 +42,39 @@ internal sealed class NumericReference
     public Vec3[][] Evaluate(MotionState state)
     {
         var scene = new NumericScene(_spec, state);
-        var value = new double[_size];
-        var first = new double[_size];
-        var second = new double[_size];
-        StepLadder.Differentiate((time, buffer) => Probe(scene, time, buffer), state.Time, _size, _groups, value, first, second);
-
+        var (value, firsts, seconds) = StepLadder.Estimate((time, buffer) => Probe(scene, time, buffer), state.Time, _size);
         scene.Compute(state.Time);
+
+        // The vectors are built at every level and the step is chosen per vector: derived quantities such as
+        // the skew part of Q'' Q^T cancel errors the raw components do not, so they settle at their own step.
+        var perLevel = new Vec3[StepLadder.Levels][][];
+        for (var level = 0; level < StepLadder.Levels; level++)
+        {
+            perLevel[level] = Vectors(scene, value, firsts[level], seconds[level]);
+        }
+
+        var results = new Vec3[_spec.Reports.Count][];
+        var column = new Vec3[StepLadder.Levels];
+        foreach (var report in _spec.Reports)
+        {
+            var count = perLevel[0][report.Index].Length;
+            results[report.Index] = new Vec3[count];
+            for (var q = 0; q < count; q++)
+            {
+                for (var level = 0; level < StepLadder.Levels; level++)
+                {
+                    column[level] = perLevel[level][report.Index][q];
+                }
+
+                results[report.Index][q] = StepLadder.Choose(column);
+            }
+        }
+
+        return results;
+    }
+
+    private Vec3[][] Vectors(NumericScene scene, double[] value, double[] first, double[] second)
+    {
         var results = new Vec3[_spec.Reports.Count][];
         foreach (var report in _spec.Reports)
         {
@@ -58,9 +82,10 @@ internal sealed class NumericReference
             var observer = scene.Orientations[report.Observer.Index];
             var basis = scene.Orientations[report.Basis.Index].Transpose();
             var observerToBasis = basis * observer;
-            var q = Mat3.From(value.AsSpan(o + (report.Kind == ReportKind.Point ? 9 : 3), 9));
-            var qRate = Mat3.From(first.AsSpan(o + (report.Kind == ReportKind.Point ? 9 : 3), 9));
-            var qAcceleration = Mat3.From(second.AsSpan(o + (report.Kind == ReportKind.Point ? 9 : 3), 9));
+            var at = o + (report.Kind == ReportKind.Point ? 9 : 3);
+            var q = Mat3.From(value.AsSpan(at, 9));
+            var qRate = Mat3.From(first.AsSpan(at, 9));
+            var qAcceleration = Mat3.From(second.AsSpan(at, 9));
 
             // With Q the moving frame's axes in the observer's basis, dQ/dt Q^T = [w]x, and the derivative of
             // that, d2Q/dt2 Q^T + dQ/dt dQ/dt^T, has the same skew part as d2Q/dt2 Q^T.

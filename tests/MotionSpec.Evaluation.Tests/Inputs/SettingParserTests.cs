@@ -60,7 +60,7 @@ public sealed class SettingParserTests
     [Fact]
     public void DerivedParamsAreRecomputedFromOverrides()
     {
-        var v = Specs.At(Crane, "tipInQuay", 0, "L=12 m");
+        var v = Specs.At(Crane, "tipInQuay", 0, "L=12 m", "k=0");
         Assert.Equal(12, v["position"][0], 12);
         Assert.Equal(2, v["position"][2], 12);
     }
