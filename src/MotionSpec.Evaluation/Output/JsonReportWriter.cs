@@ -1,3 +1,5 @@
+using System.Buffers;
+using System.Text;
 using System.Text.Json;
 using MotionSpec.Evaluation.ClosedForm;
 using MotionSpec.Kinematics;
@@ -11,13 +13,14 @@ namespace MotionSpec.Evaluation.Output;
 /// </summary>
 public static class JsonReportWriter
 {
-    /// <summary>Writes the document to <paramref name="stream"/> (UTF-8, indented, ending with a line end).</summary>
-    public static void Write(EvaluationRun run, string specName, Stream stream)
+    /// <summary>Writes the document to <paramref name="writer"/> (indented, ending with a line end).</summary>
+    public static void Write(EvaluationRun run, string specName, TextWriter writer)
     {
         ArgumentNullException.ThrowIfNull(run);
         ArgumentNullException.ThrowIfNull(specName);
-        ArgumentNullException.ThrowIfNull(stream);
-        using var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true });
+        ArgumentNullException.ThrowIfNull(writer);
+        var buffer = new ArrayBufferWriter<byte>(1 << 17);
+        using var json = new Utf8JsonWriter(buffer, new JsonWriterOptions { Indented = true });
         var values = new double[run.MaxWidth];
         json.WriteStartObject();
         json.WriteString("spec", specName);
@@ -43,10 +46,10 @@ public static class JsonReportWriter
                 run.Evaluate(r, s, values);
                 WriteSample(json, motion, run.Samples.At(s), values);
 
-                // Keep memory flat on long sweeps.
-                if (json.BytesPending > 1 << 16)
+                // Keep memory flat on long sweeps: hand whole tokens on to the writer as they accumulate.
+                if (json.BytesPending + buffer.WrittenCount > 1 << 16)
                 {
-                    json.Flush();
+                    Drain(json, buffer, writer);
                 }
             }
 
@@ -56,9 +59,16 @@ public static class JsonReportWriter
 
         json.WriteEndArray();
         json.WriteEndObject();
+        Drain(json, buffer, writer);
+        writer.Write('\n');
+        writer.Flush();
+    }
+
+    private static void Drain(Utf8JsonWriter json, ArrayBufferWriter<byte> buffer, TextWriter writer)
+    {
         json.Flush();
-        stream.WriteByte((byte)'\n');
-        stream.Flush();
+        writer.Write(Encoding.UTF8.GetString(buffer.WrittenSpan));
+        buffer.ResetWrittenCount();
     }
 
     private static void WriteSample(Utf8JsonWriter json, ReportMotion motion, double t, double[] values)

@@ -7,9 +7,9 @@ public sealed class JsonReportWriterTests
 {
     private static JsonElement Write(params string[] reports)
     {
-        var stream = new MemoryStream();
-        JsonReportWriter.Write(OutputFixture.Run(reports), "Slewing crane", stream);
-        return JsonDocument.Parse(stream.ToArray()).RootElement.Clone();
+        var writer = new StringWriter();
+        JsonReportWriter.Write(OutputFixture.Run(reports), "Slewing crane", writer);
+        return JsonDocument.Parse(writer.ToString()).RootElement.Clone();
     }
 
     [Fact]
@@ -48,9 +48,9 @@ public sealed class JsonReportWriterTests
     public void NumbersRoundTripExactly()
     {
         var run = OutputFixture.Run("tipInQuayViaTrolley");
-        var stream = new MemoryStream();
-        JsonReportWriter.Write(run, "x", stream);
-        var sample = JsonDocument.Parse(stream.ToArray()).RootElement.GetProperty("reports")[0].GetProperty("samples")[2];
+        var writer = new StringWriter();
+        JsonReportWriter.Write(run, "x", writer);
+        var sample = JsonDocument.Parse(writer.ToString()).RootElement.GetProperty("reports")[0].GetProperty("samples")[2];
         var values = new double[run.MaxWidth];
         run.Evaluate(0, 2, values);
         Assert.Equal(values[0..3], sample.GetProperty("position").EnumerateArray().Select(e => e.GetDouble()));
@@ -58,13 +58,28 @@ public sealed class JsonReportWriterTests
     }
 
     [Fact]
+    public void LongSweepIsOneValidDocument()
+    {
+        // Larger than one internal chunk, so the document is handed on in pieces.
+        var run = MotionSpec.Evaluation.Tests.Support.Specs.Run(
+            MotionSpec.Evaluation.Tests.Support.Specs.Model(OutputFixture.Spec),
+            new MotionSpec.Evaluation.Sweeps.TimeSamples(0, 0.01, 2000),
+            []);
+        var writer = new StringWriter();
+        JsonReportWriter.Write(run, "x", writer);
+        var reports = JsonDocument.Parse(writer.ToString()).RootElement.GetProperty("reports");
+        Assert.Equal(2000, reports[1].GetProperty("samples").GetArrayLength());
+        Assert.Equal(19.99, reports[1].GetProperty("samples")[1999].GetProperty("t").GetDouble(), 12);
+    }
+
+    [Fact]
     public void OutputIsDeterministic()
     {
-        var a = new MemoryStream();
-        var b = new MemoryStream();
+        var a = new StringWriter();
+        var b = new StringWriter();
         JsonReportWriter.Write(OutputFixture.Run(), "x", a);
         JsonReportWriter.Write(OutputFixture.Run(), "x", b);
-        Assert.Equal(a.ToArray(), b.ToArray());
+        Assert.Equal(a.ToString(), b.ToString());
     }
 
     private static string? S(JsonElement e, string name) => e.GetProperty(name).GetString();
