@@ -15,6 +15,9 @@ public static class CSharpDiagnosticCodes
     /// <summary>Error: the namespace given on the command line is not a dotted C# name.</summary>
     public const string InvalidNamespace = "MOT5103";
 
+    /// <summary>Error: a param's SI value does not fit the number type chosen (float, say).</summary>
+    public const string OutOfRange = "MOT5104";
+
     /// <summary>Error (a defect of ours): the C# compiler reported a diagnostic on the generated file.</summary>
     public const string CompilerRejected = "MOT5110";
 
