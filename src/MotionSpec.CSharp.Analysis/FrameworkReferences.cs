@@ -4,9 +4,8 @@ using Microsoft.CodeAnalysis;
 namespace MotionSpec.CSharp.Analysis;
 
 /// <summary>
-/// The assemblies the generated file is compiled against: the running framework's own core assemblies.
-/// The generated code names nothing beyond System.Math, System.MathF and what records need, so the core
-/// library and System.Runtime are enough; they are loaded once per process.
+/// The assemblies the generated file is compiled against: the running framework's own, loaded once per
+/// process (metadata is read lazily, so the cost is paid only for what the code touches).
 /// </summary>
 internal static class FrameworkReferences
 {
@@ -16,23 +15,33 @@ internal static class FrameworkReferences
 
     private static ImmutableArray<MetadataReference> Load()
     {
-        var wanted = new[] { "System.Private.CoreLib", "System.Runtime", "netstandard" };
+        // Every assembly of the shared framework the process runs on (not the application's own), so that a
+        // stray call into the wider library still binds and is reported as a call rather than as a compile error.
+        var folder = Path.GetDirectoryName(typeof(object).Assembly.Location) ?? string.Empty;
         var paths = new List<string>();
         if (AppContext.GetData("TRUSTED_PLATFORM_ASSEMBLIES") is string trusted)
         {
             paths.AddRange(trusted.Split(Path.PathSeparator)
-                .Where(p => wanted.Contains(Path.GetFileNameWithoutExtension(p), StringComparer.OrdinalIgnoreCase)));
+                .Where(p => string.Equals(Path.GetDirectoryName(p), folder, StringComparison.Ordinal)));
         }
 
-        if (paths.Count == 0)
+        if (paths.Count == 0 && folder.Length > 0)
         {
-            // Hosts that do not publish the list (some test runners): the folder of the core library has them.
-            var folder = Path.GetDirectoryName(typeof(object).Assembly.Location) ?? string.Empty;
-            paths.AddRange(wanted.Select(name => Path.Combine(folder, name + ".dll")).Where(File.Exists));
+            // Hosts that do not publish the list: the folder of the core library holds the framework.
+            paths.AddRange(Directory.EnumerateFiles(folder, "*.dll"));
         }
 
-        return paths.OrderBy(p => p, StringComparer.Ordinal)
+        return paths.Where(IsManagedAssemblyName).OrderBy(p => p, StringComparer.Ordinal)
             .Select(p => (MetadataReference)MetadataReference.CreateFromFile(p))
             .ToImmutableArray();
+    }
+
+    // Native libraries of the runtime sit in the same folder; only System.*, Microsoft.* and the facades are managed.
+    private static bool IsManagedAssemblyName(string path)
+    {
+        var name = Path.GetFileName(path);
+        return name.EndsWith(".dll", StringComparison.OrdinalIgnoreCase)
+            && (name.StartsWith("System.", StringComparison.Ordinal) || name.StartsWith("Microsoft.", StringComparison.Ordinal)
+                || name is "netstandard.dll" or "mscorlib.dll");
     }
 }
