@@ -19,11 +19,7 @@ public static class CSharpEmitter
     /// <summary>Emits the evaluator of <paramref name="spec"/>, which must have checked without errors.</summary>
     public static CSharpEmitResult Emit(CheckedSpec spec, CSharpEmitOptions options)
     {
-        if (spec is null)
-        {
-            throw new ArgumentNullException(nameof(spec));
-        }
-
+        _ = spec ?? throw new ArgumentNullException(nameof(spec));
         options ??= new CSharpEmitOptions();
         var diagnostics = new DiagnosticBag();
         var model = spec.Model;
@@ -129,7 +125,7 @@ public static class CSharpEmitter
         return map;
     }
 
-    private static Func<Sym, string> InputNames(EvaluatorNames names, IReadOnlyList<Language.Binding.Symbols.ParamSymbol> independent,
+    private static Func<Sym, string> InputNames(EvaluatorNames names, List<Language.Binding.Symbols.ParamSymbol> independent,
         Language.Binding.BoundSpec bound)
     {
         var byName = new Dictionary<string, string>(StringComparer.Ordinal);
@@ -159,7 +155,7 @@ public static class CSharpEmitter
     private static InvalidOperationException Unknown(Sym symbol) =>
         new("the kinematic model refers to '" + symbol.Name + "', which the spec does not declare as an input");
 
-    private static void ReportRenames(EvaluatorNames names, IReadOnlyList<Language.Binding.Symbols.ParamSymbol> independent,
+    private static void ReportRenames(EvaluatorNames names, List<Language.Binding.Symbols.ParamSymbol> independent,
         Language.Binding.BoundSpec bound, DiagnosticBag diagnostics)
     {
         foreach (var rename in names.Renames)
