@@ -65,11 +65,11 @@ internal sealed class LoadedEvaluator
         {
             for (var order = 0; order < 3; order++)
             {
-                _stateFields[(3 * i) + order].SetValue(state, _float ? (float)coords[i, order] : coords[i, order]);
+                _stateFields[(3 * i) + order].SetValue(state, _float ? (object)(float)coords[i, order] : coords[i, order]);
             }
         }
 
-        var motion = _methods[reportIndex].Invoke(null, [_float ? (float)t : t, state, _parameters])!;
+        var motion = _methods[reportIndex].Invoke(null, [_float ? (object)(float)t : t, state, _parameters])!;
         var quantities = Spec.Model!.Reports[reportIndex].Quantities;
         var result = new double[3 * quantities.Count];
         for (var q = 0; q < quantities.Count; q++)

@@ -6,25 +6,41 @@ namespace MotionSpec.CSharp.Tests;
 
 /// <summary>
 /// The reference the emitted code must agree with: the kinematic model's own expressions evaluated by the
-/// symbolic engine's evaluator (no CSE, no printing, no C#), with params at the spec's values.
+/// symbolic engine's evaluation tape (no C# printing, no Roslyn), with params at the spec's values.
 /// </summary>
 internal static class ReferenceValues
 {
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<CheckedSpec, EvaluationPlan[]> Plans = new();
+
     public static double[] Evaluate(CheckedSpec spec, int reportIndex, double t, double[,] coords)
     {
         var bound = spec.Model!.Spec;
-        var paramValues = bound.Parameters.ToDictionary(p => p.Name, p => p.Value, StringComparer.Ordinal);
-        var coordIndex = bound.Coords.Select((c, i) => (c.Name, i)).ToDictionary(p => p.Name, p => p.i, StringComparer.Ordinal);
-        double ValueOf(Symbol s) => s.Kind switch
+        var plans = Plans.GetValue(spec, Compile);
+        var inputs = new List<double> { t };
+        inputs.AddRange(bound.Parameters.Select(p => p.Value));
+        for (var i = 0; i < bound.Coords.Count; i++)
         {
-            SymbolKind.Time => t,
-            SymbolKind.Param => paramValues[s.Name],
-            SymbolKind.Coord => coords[coordIndex[s.Name], s.Order],
-            _ => throw new InvalidOperationException("unexpected symbol " + s.Name),
-        };
+            inputs.AddRange([coords[i, 0], coords[i, 1], coords[i, 2]]);
+        }
 
-        var report = spec.Model.Reports[reportIndex];
-        return report.Quantities.SelectMany(q => report[q].Components).Select(e => Evaluator.Evaluate(e, ValueOf).Value).ToArray();
+        var outputs = new double[plans[reportIndex].OutputCount];
+        plans[reportIndex].Evaluate(inputs.ToArray(), outputs);
+        return outputs;
+    }
+
+    // One tape per report over t, every param (derived ones at their spec values) and every coord's value,
+    // rate and acceleration: the symbolic engine's own numeric path, sharing nothing with the C# printer.
+    private static EvaluationPlan[] Compile(CheckedSpec spec)
+    {
+        var model = spec.Model!;
+        var inputs = new List<Symbol> { Symbol.Time };
+        inputs.AddRange(model.Spec.Parameters.Select(KinematicModel.SymbolOf));
+        foreach (var coord in model.Spec.Coords)
+        {
+            inputs.AddRange([KinematicModel.SymbolOf(coord, 0), KinematicModel.SymbolOf(coord, 1), KinematicModel.SymbolOf(coord, 2)]);
+        }
+
+        return model.Reports.Select(r => EvaluationPlan.Compile(r.Quantities.SelectMany(q => r[q].Components).ToList(), inputs)).ToArray();
     }
 
     /// <summary>
