@@ -63,7 +63,7 @@ public class GeneratorDriverTests
     [Fact]
     public void A_spec_error_is_a_compiler_diagnostic_at_the_spec_line_and_column()
     {
-        const string bad = "param R = 0.25 m\nframe ground\nframe table in grund {\n    rotate about z by t\n}\n";
+        const string bad = "param R = 0.25 m\nframe ground\nframe table in grund {\n    rotate about z by 0.3\n}\n";
 
         var (_, diagnostics, generated) = Run(("/specs/broken.motion", bad));
 

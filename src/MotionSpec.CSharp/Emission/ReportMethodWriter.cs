@@ -5,8 +5,8 @@ using Sym = MotionSpec.Symbolic.Symbol;
 namespace MotionSpec.CSharp.Emission;
 
 /// <summary>
-/// Writes the method of one report: all 24 (point) or 15 (frame) components are put through common
-/// subexpression elimination together, so a sine, a rotation entry or an angular velocity needed by several
+/// Writes the method of one report: all 24 (point) or 15 (frame) components have their common factors
+/// pulled out and are then put through common subexpression elimination together, so a sine, a rotation entry or an angular velocity needed by several
 /// outputs is computed once, into a local, before the result is assembled.
 /// </summary>
 internal static class ReportMethodWriter
@@ -24,7 +24,7 @@ internal static class ReportMethodWriter
             }
         }
 
-        var program = CommonSubexpressions.Eliminate(outputs, "k", isTaken);
+        var program = CommonSubexpressions.Eliminate(new GreedyFactoring().Apply(outputs), "k", isTaken);
         string Print(Expr e) => MathNames.Qualify(CSharpPrinter.Print(e, type, inputName));
 
         var report = motion.Report;
