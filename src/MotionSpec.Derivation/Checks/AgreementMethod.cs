@@ -6,7 +6,7 @@ internal enum AgreementMethod
     /// <summary>Every difference simplifies to zero.</summary>
     Symbolic,
 
-    /// <summary>Some difference does not simplify to zero, but all agree at random states.</summary>
+    /// <summary>All agree at random states (the differences were too large to simplify, or did not simplify to zero).</summary>
     Numeric,
 
     /// <summary>They disagree at some state.</summary>

@@ -22,27 +22,54 @@ internal static class ClosedFormTextWriter
             Line(text, "# " + sentence);
         }
 
-        if (named.Temporaries.Count > 0)
+        var dimensions = new TextDimensions(model.Spec, new SpecNames(model.Spec).IsTaken);
+        var temporaries = new List<(string Name, Expr Value)>();
+        foreach (var temporary in named.Temporaries)
         {
-            Line(text, string.Empty);
-            Line(text, "# Named intermediates used by the lines below.");
-            foreach (var temporary in named.Temporaries)
-            {
-                Line(text, "let " + temporary.Name.Name + " = " + TextPrinter.Print(temporary.Value));
-            }
+            var value = dimensions.Repair(temporary.Value, null);
+            dimensions.Define(temporary.Name, value);
+            temporaries.Add((temporary.Name.Name, value));
         }
 
+        var vectors = new List<string>();
         var index = 0;
         foreach (var report in model.Reports)
         {
-            Line(text, string.Empty);
             foreach (var quantity in report.Quantities)
             {
-                var x = TextPrinter.Print(named.Outputs[index++]);
-                var y = TextPrinter.Print(named.Outputs[index++]);
-                var z = TextPrinter.Print(named.Outputs[index++]);
-                Line(text, $"{report.Name}.{QuantityInfo.Key(quantity)} = [{x}, {y}, {z}] in {report.Report.Basis.Name}");
+                var expected = QuantityInfo.DimensionOf(quantity);
+                var parts = Enumerable.Range(0, 3).Select(_ => TextPrinter.Print(dimensions.Repair(named.Outputs[index++], expected))).ToArray();
+                vectors.Add($"{report.Name}.{QuantityInfo.Key(quantity)} = [{parts[0]}, {parts[1]}, {parts[2]}] in {report.Report.Basis.Name}");
             }
+
+            vectors.Add(string.Empty);
+        }
+
+        if (dimensions.UnitLets.Count > 0)
+        {
+            Line(text, string.Empty);
+            Line(text, "# Units of value one: they multiply terms whose unit was folded into an SI number, so that every");
+            Line(text, "# sum reads back with consistent dimensions. They change no value.");
+            foreach (var (name, definition) in dimensions.UnitLets)
+            {
+                Line(text, "let " + name.Name + " = " + definition);
+            }
+        }
+
+        if (temporaries.Count > 0)
+        {
+            Line(text, string.Empty);
+            Line(text, "# Named intermediates used by the lines below.");
+            foreach (var (name, value) in temporaries)
+            {
+                Line(text, "let " + name + " = " + TextPrinter.Print(value));
+            }
+        }
+
+        Line(text, string.Empty);
+        foreach (var vector in vectors.Take(vectors.Count - 1))
+        {
+            Line(text, vector);
         }
 
         return text.ToString();
