@@ -1,0 +1,20 @@
+using System.Collections.ObjectModel;
+
+namespace MotionSpec.Symbolic;
+
+/// <summary>A canonical sum of two or more terms (flattened, sorted, like terms combined).</summary>
+public sealed class Sum : Expr
+{
+    private Sum(Expr[] terms)
+        : base(ExprKind.Sum, 7001, terms)
+    {
+        Terms = new ReadOnlyCollection<Expr>(terms);
+    }
+
+    /// <summary>The terms in canonical order (a constant term, if any, first).</summary>
+    public IReadOnlyList<Expr> Terms { get; }
+
+    internal static Sum CreateRaw(Expr[] sortedTerms) => InternTable.Intern(new Sum(sortedTerms));
+
+    internal override bool ShallowEquals(Expr other) => other is Sum && SameChildren(other);
+}

@@ -1,0 +1,36 @@
+namespace MotionSpec.Symbolic;
+
+/// <summary>
+/// The distinct-node count of the top few levels of an expression. Rewrites of one sum only change its top
+/// levels, and the levels below are shared by both sides of a comparison, so this compares candidates at a
+/// cost independent of the size of the whole DAG.
+/// </summary>
+internal static class LocalSize
+{
+    public const int Levels = 6;
+
+    public static int Of(Expr e)
+    {
+        var seen = new HashSet<Expr> { e };
+        var level = new List<Expr> { e };
+        var next = new List<Expr>();
+        for (int depth = 0; depth < Levels && level.Count > 0; depth++)
+        {
+            next.Clear();
+            foreach (var node in level)
+            {
+                foreach (var child in node.Children)
+                {
+                    if (seen.Add(child))
+                    {
+                        next.Add(child);
+                    }
+                }
+            }
+
+            (level, next) = (next, level);
+        }
+
+        return seen.Count;
+    }
+}
