@@ -8,25 +8,39 @@ using MotionSpec.Kinematics;
 namespace MotionSpec.Derivation;
 
 /// <summary>
-/// The derivation pass: names the recurring subexpressions of every report's closed forms, then writes either
+/// The derivation pass: names the recurring subexpressions of the reports' closed forms, then writes either
 /// the plain closed forms or a document (notation, spec, frames, named intermediates, reports, caution) as
 /// Markdown or LaTeX. Pure: the same model gives the same text.
 /// </summary>
 public static class DerivationWriter
 {
-    /// <summary>Writes the derivation of a checked model; <paramref name="displayName"/> is the spec's title or file name.</summary>
-    public static string Write(KinematicModel model, string displayName, DerivationFormat format)
+    /// <summary>
+    /// Writes the derivation of a checked model; <paramref name="displayName"/> is the spec's title or file
+    /// name. <paramref name="reportNames"/>, when given, limits it to those reports (kept in file order);
+    /// every name must be a report of the model (see <see cref="UnknownReports"/>).
+    /// </summary>
+    public static string Write(KinematicModel model, string displayName, DerivationFormat format, IReadOnlyCollection<string>? reportNames = null)
     {
         ArgumentNullException.ThrowIfNull(model);
         ArgumentNullException.ThrowIfNull(displayName);
-        var named = NamedIntermediates.Find(ClosedFormTextWriter.Outputs(model), new SpecNames(model.Spec));
+        var reports = reportNames is null || reportNames.Count == 0
+            ? model.Reports
+            : model.Reports.Where(r => reportNames.Contains(r.Name, StringComparer.Ordinal)).ToList();
+        var named = NamedIntermediates.Find(ClosedFormTextWriter.Outputs(reports), new SpecNames(model.Spec));
         if (format == DerivationFormat.Text)
         {
-            return ClosedFormTextWriter.Write(model, displayName, named);
+            return ClosedFormTextWriter.Write(model, reports, displayName, named);
         }
 
-        var document = Build(new DerivationContext(model, displayName, named));
+        var document = Build(new DerivationContext(model, reports, displayName, named));
         return format == DerivationFormat.Latex ? LatexRenderer.Render(document) : MarkdownRenderer.Render(document);
+    }
+
+    /// <summary>The names in <paramref name="reportNames"/> that are not reports of the model, in the order given.</summary>
+    public static IReadOnlyList<string> UnknownReports(KinematicModel model, IEnumerable<string> reportNames)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        return reportNames.Where(n => !model.Reports.Any(r => string.Equals(r.Name, n, StringComparison.Ordinal))).ToList();
     }
 
     private static DerivationDocument Build(DerivationContext context)

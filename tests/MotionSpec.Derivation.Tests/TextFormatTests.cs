@@ -119,6 +119,17 @@ public partial class TextFormatTests
         Assert.Equal(Specs.Derived(Specs.Crane, format), first);
     }
 
+    [Fact]
+    public void A_chosen_report_is_derived_alone_and_unknown_names_are_reported()
+    {
+        var model = Specs.Model(Specs.Crane);
+        var text = DerivationWriter.Write(model, "demo", DerivationFormat.Text, ["tipOnTrolley"]);
+        var vectors = text.Split('\n').Where(l => VectorLine().IsMatch(l)).ToList();
+        Assert.Equal(8, vectors.Count);
+        Assert.All(vectors, v => Assert.StartsWith("tipOnTrolley.", v, StringComparison.Ordinal));
+        Assert.Equal(["tipInQuy", "nope"], DerivationWriter.UnknownReports(model, ["tipInQuay", "tipInQuy", "hookInQuay", "nope"]));
+    }
+
     private static List<string> SplitTopLevel(string body)
     {
         var parts = new List<string>();

@@ -79,7 +79,7 @@ public class TextbookFormTests
     private static Dictionary<Quantity, Vector3Expr> Printed(string spec, string reportName)
     {
         var model = Specs.Model(spec);
-        var named = NamedIntermediates.Find(ClosedFormTextWriter.Outputs(model), new SpecNames(model.Spec));
+        var named = NamedIntermediates.Find(ClosedFormTextWriter.Outputs(model.Reports), new SpecNames(model.Spec));
         Assert.Empty(named.Temporaries);
         var result = new Dictionary<Quantity, Vector3Expr>();
         var index = 0;

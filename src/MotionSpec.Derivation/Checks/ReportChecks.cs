@@ -40,9 +40,9 @@ internal sealed class ReportChecks
     /// <summary>Point reports: each term against its defining formula evaluated from r, v_rel, omega, alpha.</summary>
     public Agreement TermsAgainstDefinitions { get; }
 
-    public static ReportChecks Run(KinematicModel model, FrameGeometry geometry, int reportIndex)
+    public static ReportChecks Run(KinematicModel model, FrameGeometry geometry, ReportMotion motion)
     {
-        var motion = model.Reports[reportIndex];
+        var reportIndex = motion.Report.Index;
         var report = motion.Report;
         var seed = 7919 * (reportIndex + 1);
         var observer = report.Observer;

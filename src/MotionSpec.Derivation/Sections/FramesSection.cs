@@ -14,7 +14,7 @@ internal static class FramesSection
     public static void Add(List<Block> blocks, DerivationContext context)
     {
         var spec = context.Model.Spec;
-        var compositions = CompositionsUsed(spec);
+        var compositions = CompositionsUsed(context.Reports.Select(r => r.Report));
         blocks.Add(new Heading(1, "Frames"));
         foreach (var frame in spec.Frames)
         {
@@ -118,10 +118,10 @@ internal static class FramesSection
     }
 
     /// <summary>(frame, observer, basis) for every report's moving frame or subject frame, first use first.</summary>
-    private static List<(FrameSymbol Frame, FrameSymbol Observer, FrameSymbol Basis)> CompositionsUsed(BoundSpec spec)
+    private static List<(FrameSymbol Frame, FrameSymbol Observer, FrameSymbol Basis)> CompositionsUsed(IEnumerable<ReportSymbol> reports)
     {
         var list = new List<(FrameSymbol Frame, FrameSymbol Observer, FrameSymbol Basis)>();
-        foreach (var report in spec.Reports)
+        foreach (var report in reports)
         {
             var frame = report.Kind == ReportKind.Point ? report.Via ?? report.SubjectFrame : report.SubjectFrame;
             var entry = (frame, report.Observer, report.Basis);

@@ -15,10 +15,10 @@ internal static class ReportsSection
     public static void Add(List<Block> blocks, DerivationContext context)
     {
         blocks.Add(new Heading(1, "Reports"));
-        for (var index = 0; index < context.Model.Reports.Count; index++)
+        for (var index = 0; index < context.Reports.Count; index++)
         {
-            var report = context.Model.Reports[index].Report;
-            var checks = ReportChecks.Run(context.Model, context.Geometry, index);
+            var report = context.Reports[index].Report;
+            var checks = ReportChecks.Run(context.Model, context.Geometry, context.Reports[index]);
             if (report.Kind == ReportKind.Point)
             {
                 AddPoint(blocks, context, index, report, checks);

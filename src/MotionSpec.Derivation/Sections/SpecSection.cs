@@ -79,7 +79,7 @@ internal static class SpecSection
         blocks.Add(new Heading(2, "Reports"));
         blocks.Add(new Table(
             [[new Words("report")], [new Words("motion of")], [new Words("seen from")], [new Words("moving frame")], [new Words("basis")]],
-            spec.Reports.Select(r => (IReadOnlyList<IReadOnlyList<Inline>>)
+            context.Reports.Select(m => m.Report).Select(r => (IReadOnlyList<IReadOnlyList<Inline>>)
             [
                 [new Code(r.Name)],
                 [new Words(r.Kind == ReportKind.Point ? "point " : "frame "), new Code(r.SubjectName)],

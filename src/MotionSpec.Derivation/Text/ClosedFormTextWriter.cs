@@ -12,7 +12,7 @@ namespace MotionSpec.Derivation.Text;
 /// </summary>
 internal static class ClosedFormTextWriter
 {
-    public static string Write(KinematicModel model, string displayName, NamedIntermediates named)
+    public static string Write(KinematicModel model, IReadOnlyList<ReportMotion> reports, string displayName, NamedIntermediates named)
     {
         var text = new StringBuilder();
         Line(text, "# Closed forms of " + OneLine(displayName) + ", written by motionspec derive --format text.");
@@ -33,7 +33,7 @@ internal static class ClosedFormTextWriter
 
         var vectors = new List<string>();
         var index = 0;
-        foreach (var report in model.Reports)
+        foreach (var report in reports)
         {
             foreach (var quantity in report.Quantities)
             {
@@ -76,8 +76,8 @@ internal static class ClosedFormTextWriter
     }
 
     /// <summary>Every component of every report vector, in the order the text and documents print them.</summary>
-    public static IReadOnlyList<Expr> Outputs(KinematicModel model) =>
-        model.Reports.SelectMany(r => r.Quantities.SelectMany(q => r[q].Components)).ToArray();
+    public static IReadOnlyList<Expr> Outputs(IReadOnlyList<ReportMotion> reports) =>
+        reports.SelectMany(r => r.Quantities.SelectMany(q => r[q].Components)).ToArray();
 
     private static void Line(StringBuilder text, string line) => text.Append(line).Append('\n');
 
