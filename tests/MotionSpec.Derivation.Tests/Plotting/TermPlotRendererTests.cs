@@ -83,26 +83,6 @@ public class TermPlotRendererTests
         Assert.Null(PlotImageFormats.FromPath("plot"));
     }
 
-    [Fact]
-    public void File_is_written_whole_and_leaves_no_temporary_beside_it()
-    {
-        var folder = Directory.CreateTempSubdirectory("motionspec-plot-");
-        try
-        {
-            var target = Path.Combine(folder.FullName, "terms.svg");
-            File.WriteAllText(target, "old");
-            var bytes = TermPlotRenderer.Render(BeadOnRod(withComponents: false), PlotImageFormat.Svg);
-            Assert.Null(PlotFileWriter.Write(target, bytes));
-            Assert.Equal(bytes, File.ReadAllBytes(target));
-            Assert.Single(Directory.GetFiles(folder.FullName));
-            Assert.NotNull(PlotFileWriter.Write(Path.Combine(folder.FullName, "missing", "x.svg"), bytes));
-        }
-        finally
-        {
-            folder.Delete(recursive: true);
-        }
-    }
-
     internal static Dictionary<string, int> CountColours(SKBitmap bitmap, int maxX)
     {
         var counts = new Dictionary<string, int>(StringComparer.Ordinal);
