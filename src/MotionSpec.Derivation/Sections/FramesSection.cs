@@ -16,6 +16,11 @@ internal static class FramesSection
         var spec = context.Model.Spec;
         var compositions = CompositionsUsed(context.Reports.Select(r => r.Report));
         blocks.Add(new Heading(1, "Frames"));
+        if (spec.Frames.All(f => f.Parent is null))
+        {
+            blocks.Add(new Paragraph(new Words("Every frame of the spec is a root: none moves relative to another.")));
+        }
+
         foreach (var frame in spec.Frames)
         {
             var wanted = compositions.Where(c => ReferenceEquals(c.Frame, frame)).ToList();

@@ -15,6 +15,11 @@ internal static class ReportsSection
     public static void Add(List<Block> blocks, DerivationContext context)
     {
         blocks.Add(new Heading(1, "Reports"));
+        if (context.Reports.Count == 0)
+        {
+            blocks.Add(new Paragraph(new Words("The spec asks for no reports, so there is nothing to derive.")));
+        }
+
         for (var index = 0; index < context.Reports.Count; index++)
         {
             var report = context.Reports[index].Report;
