@@ -123,6 +123,23 @@ public class DocumentTests
     }
 
     [Fact]
+    public void Observer_up_the_tree_and_a_spin_frame_basis_are_composed_and_checked()
+    {
+        var markdown = Specs.Derived(Specs.HookView, DerivationFormat.Markdown);
+        Assert.Contains("Seen from hook, written in the basis of trolley, link by link along hook \\> trolley \\> boom:", markdown, StringComparison.Ordinal);
+        // Going up a link, the parent turns the other way as seen from the child.
+        Assert.Contains("\\left[\\omega_{\\mathrm{trolley}/\\mathrm{hook}}\\right]_{\\mathrm{trolley}} &= -\\left[\\omega_{\\mathrm{hook}/\\mathrm{trolley}}\\right]_{\\mathrm{trolley}}", markdown, StringComparison.Ordinal);
+        Assert.Equal(6, markdown.Split("checked ").Length - 1);
+        Assert.DoesNotContain("CHECK FAILED", markdown, StringComparison.Ordinal);
+        Assert.DoesNotContain("not checked", markdown, StringComparison.Ordinal);
+
+        // The lens at d = 0.05 m on the imu axis z, imu turning at (a, 0, c) = (swing', 0, psi') relative to the
+        // hook: omega x (omega x r) = (a c d, 0, -a^2 d), the vector triple product expanded by hand.
+        var text = Specs.Derived(Specs.HookView, DerivationFormat.Text);
+        Assert.Contains("lensInHookBasisImu.centripetal = [psi'*swing'/20, 0, -swing'^2/20] in imu", text, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Title_text_cannot_become_markup()
     {
         var model = Specs.Model(Specs.Turntable);

@@ -75,6 +75,31 @@ internal static class Specs
         report hook in quay
         """;
 
+    // Observer deep in the tree (the path to the moving frame goes up), and a sensor on a spin frame reported in
+    // the spin frame's own basis.
+    public const string HookView = """
+        param w = 0.6 rpm
+        coord psi : angle
+        coord swing : angle
+        frame quay
+        frame boom in quay {
+            rotate about z by w * t + psi
+        }
+        frame trolley in boom {
+            origin at [4 m, 0, 2 m]
+        }
+        frame hook in trolley {
+            rotate about x by swing
+        }
+        frame imu in hook {
+            spin [swing', 0, psi']
+        }
+        point bollard in quay at [10 m, 0, 0]
+        point lens in imu at [0, 0, 0.05]
+        report bollard in hook via boom basis trolley
+        report lens in hook basis imu
+        """;
+
     public static CheckedSpec Check(string text, string path = "test.motion")
     {
         var checkedSpec = SpecCompiler.Check(path, text);
