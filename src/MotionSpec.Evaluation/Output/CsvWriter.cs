@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using MotionSpec.Evaluation.ClosedForm;
 using MotionSpec.Kinematics;
@@ -34,7 +35,10 @@ public static class CsvWriter
         var values = new double[run.MaxWidth];
         var pointCells = QuantityInfo.PointQuantities.Count * 3;
         var frameCells = QuantityInfo.FrameQuantities.Count * 3;
-        var line = new StringBuilder();
+
+        // Numbers are formatted straight into one line buffer: a million-row sweep allocates nothing per cell.
+        var longestName = run.Reports.Count == 0 ? 0 : run.Reports.Max(m => m.Name.Length);
+        var line = new char[longestName + (64 * (3 + pointCells + frameCells))];
         for (var r = 0; r < run.Reports.Count; r++)
         {
             var report = run.Reports[r];
@@ -42,26 +46,39 @@ public static class CsvWriter
             for (var s = 0; s < run.Samples.Count; s++)
             {
                 run.Evaluate(r, s, values);
-                line.Clear();
-                line.Append(report.Name).Append(',').Append(NumberText.RoundTrip(run.Samples.At(s)));
+                var n = 0;
+                report.Name.AsSpan().CopyTo(line);
+                n += report.Name.Length;
+                line[n++] = ',';
+                n += Format(run.Samples.At(s), line.AsSpan(n));
                 if (!isPoint)
                 {
-                    line.Append(',', pointCells);
+                    line.AsSpan(n, pointCells).Fill(',');
+                    n += pointCells;
                 }
 
                 for (var i = 0; i < report.Quantities.Count * 3; i++)
                 {
-                    line.Append(',').Append(NumberText.RoundTrip(values[i]));
+                    line[n++] = ',';
+                    n += Format(values[i], line.AsSpan(n));
                 }
 
                 if (isPoint)
                 {
-                    line.Append(',', frameCells);
+                    line.AsSpan(n, frameCells).Fill(',');
+                    n += frameCells;
                 }
 
-                line.Append('\n');
-                writer.Write(line);
+                line[n++] = '\n';
+                writer.Write(line, 0, n);
             }
         }
+    }
+
+    private static int Format(double value, Span<char> destination)
+    {
+        // "R" is the shortest text that reads back as the same double; 64 characters always hold it.
+        value.TryFormat(destination, out var written, "R", CultureInfo.InvariantCulture);
+        return written;
     }
 }
