@@ -71,7 +71,7 @@ public class DiagnosticTests
             coord q : length
             frame ground
             frame slide in ground
-            point p in slide at [q'', 0, 0]
+            point p in slide at [0.5 * q'', 0, 0]
                 report p in ground
             """,
             KinematicsDiagnosticCodes.DerivativeNotAvailable,
@@ -88,7 +88,7 @@ public class DiagnosticTests
             coord a : angle
             frame ground
             frame gyro in ground {
-                spin [0, 0, a'']
+                spin [0, 0, 2 * a'']
             }
             report gyro in ground basis gyro
             """,

@@ -48,7 +48,7 @@ public class FiveTermTests
             origin at [0.5 m, 0, 0.2 m]
         }
         frame wrist in arm {
-            rotate about z by b * t
+            rotate about z by b + 0.2 * t
             origin at [0, c, 0] + 0.1 * base.z
         }
         frame column in base {
@@ -60,7 +60,7 @@ public class FiveTermTests
         report tool in column via wrist basis base as toolSeenFromColumn
         report wrist in column basis arm
         """,
-        // A spin frame with a legal report in its own basis.
+        // A spin frame (with no origin of its own, so that its offset stays on the parent's side) and legal reports.
         """
         coord p : angle
         coord q : angle
@@ -69,13 +69,16 @@ public class FiveTermTests
         frame mast in ground {
             rotate about z by yaw
         }
-        frame head in mast {
-            spin [p', q', 0]
+        frame mount in mast {
             origin at [0, 0, 1.5 m]
         }
+        frame head in mount {
+            spin [p', q', 0]
+        }
         point lens in head at [0.1 m, 0, 0]
-        report lens in mast basis head
-        report head in mast basis head
+        report lens in mount basis head
+        report head in mount basis head
+        report mount in ground
         """,
     };
 

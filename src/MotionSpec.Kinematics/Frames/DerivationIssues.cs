@@ -1,6 +1,8 @@
 using MotionSpec.Language.Binding.Symbols;
 using MotionSpec.Symbolic;
 
+using Symbol = MotionSpec.Symbolic.Symbol;
+
 namespace MotionSpec.Kinematics.Frames;
 
 /// <summary>

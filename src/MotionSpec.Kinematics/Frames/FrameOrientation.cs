@@ -1,4 +1,5 @@
 using MotionSpec.Language.Binding.Symbols;
+using MotionSpec.Kinematics.Lowering;
 using MotionSpec.Symbolic;
 
 namespace MotionSpec.Kinematics.Frames;
@@ -41,7 +42,7 @@ internal sealed class FrameOrientation(Func<Language.Binding.Expressions.BoundEx
     }
 
     /// <summary>The merged turns of a frame: unit axis (in the frame as turned so far) and angle.</summary>
-    public IReadOnlyList<(Vector3Expr Axis, Expr Angle)> Turns(FrameSymbol frame) => Turns(frame.Index, frame);
+    public IReadOnlyList<(Vector3Expr Axis, Expr Angle)> MergedTurns(FrameSymbol frame) => Turns(frame.Index, frame);
 
     /// <summary>omega of the link frame/parent in the frame's basis.</summary>
     public Vector3Expr LinkAngularVelocity(FrameSymbol frame)
@@ -60,7 +61,7 @@ internal sealed class FrameOrientation(Func<Language.Binding.Expressions.BoundEx
             // omega = sum over turns i of (R_{i+1} ... R_n)^T a_i q_i', accumulated from the last turn back.
             omega = Vector3Expr.Zero;
             var after = Matrix3Expr.Identity;
-            var turns = Turns(frame);
+            var turns = MergedTurns(frame);
             for (var i = turns.Count - 1; i >= 0; i--)
             {
                 var (axis, angle) = turns[i];

@@ -4,6 +4,8 @@ using MotionSpec.Language.Binding.Expressions;
 using MotionSpec.Language.Binding.Symbols;
 using MotionSpec.Symbolic;
 
+using Symbol = MotionSpec.Symbolic.Symbol;
+
 namespace MotionSpec.Kinematics.Lowering;
 
 /// <summary>

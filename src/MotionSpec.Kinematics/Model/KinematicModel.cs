@@ -2,6 +2,8 @@ using MotionSpec.Language.Binding;
 using MotionSpec.Language.Binding.Symbols;
 using MotionSpec.Symbolic;
 
+using Symbol = MotionSpec.Symbolic.Symbol;
+
 namespace MotionSpec.Kinematics;
 
 /// <summary>

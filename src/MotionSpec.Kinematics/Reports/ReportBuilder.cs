@@ -19,14 +19,23 @@ internal sealed class ReportBuilder(
     AngularMotion angular,
     VectorDerivative derivative)
 {
+    // Above this many distinct nodes a closed form is kept as composed (see Tidy).
+    private const int SimplifyNodeLimit = 60;
+
     private readonly Dictionary<int, FrameVector> _origins = [];
 
     public ReportMotion Build(ReportSymbol report)
     {
         var values = report.Kind == ReportKind.Point ? PointReport(report) : FrameReport(report);
-        var inBasis = values.ToDictionary(p => p.Key, p => p.Value.Map(Simplifier.Simplify));
+        var inBasis = values.ToDictionary(p => p.Key, p => p.Value.Map(Tidy));
         return new ReportMotion(report, report.Kind == ReportKind.Point ? QuantityInfo.PointQuantities : QuantityInfo.FrameQuantities, inBasis);
     }
+
+    /// <summary>
+    /// Simplifies a closed form an engineer will read. Long chains are left as composed: their shared structure is
+    /// what keeps them linear in size, and hand-style simplification of them costs more than it gives.
+    /// </summary>
+    private static Expr Tidy(Expr e) => ExprMetrics.NodeCount(e) <= SimplifyNodeLimit ? Simplifier.Simplify(e) : e;
 
     /// <summary>The position of F's origin relative to B's origin, as parts along the tree path.</summary>
     public FrameVector OriginOffset(FrameSymbol frame, FrameSymbol from)
