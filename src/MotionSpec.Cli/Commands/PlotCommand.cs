@@ -80,14 +80,14 @@ internal static class PlotCommand
 
         if (!TimeSampleParser.TryParse(request.Time, out var samples, out var timeError))
         {
-            return Usage(stderr, "--t: " + timeError);
+            return Usage(stderr, timeError ?? "--t is not a time or a sweep");
         }
 
         if (!SettingParser.TryParse(model.Spec, request.Settings, out var inputs, out var settingErrors))
         {
             foreach (var error in settingErrors)
             {
-                stderr.WriteLine("motionspec plot: --set: " + error);
+                stderr.WriteLine("motionspec plot: " + error);
             }
 
             return ExitCodes.Usage;
