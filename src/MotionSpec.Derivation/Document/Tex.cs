@@ -23,11 +23,57 @@ internal static class Tex
     public static string Column(Vector3Expr v) => Column(v.X, v.Y, v.Z);
 
     public static string Column(Expr x, Expr y, Expr z) =>
-        $"\\begin{{bmatrix}} {LatexPrinter.Print(x)} \\\\ {LatexPrinter.Print(y)} \\\\ {LatexPrinter.Print(z)} \\end{{bmatrix}}";
+        $"\\begin{{bmatrix}} {Cell(x)} \\\\ {Cell(y)} \\\\ {Cell(z)} \\end{{bmatrix}}";
+
+    /// <summary>Printed width (in LaTeX source characters) beyond which a sum is broken over several lines.</summary>
+    public const int LineWidth = 80;
+
+    /// <summary>
+    /// One entry of a column or matrix. A long sum is broken between its terms into lines of an
+    /// <c>aligned</c> block inside the entry, so that wide closed forms stay on the page.
+    /// </summary>
+    public static string Cell(Expr e)
+    {
+        var whole = LatexPrinter.Print(e);
+        if (whole.Length <= LineWidth || e is not Sum sum)
+        {
+            return whole;
+        }
+
+        var lines = new List<string>();
+        var line = new System.Text.StringBuilder();
+        foreach (var term in sum.Terms)
+        {
+            var negative = IsNegative(term);
+            var text = LatexPrinter.Print(negative ? -term : term);
+            if (term is Sum)
+            {
+                text = "\\left(" + text + "\\right)";
+            }
+
+            var piece = line.Length == 0 && lines.Count == 0
+                ? (negative ? "-" : string.Empty) + text
+                : (negative ? " - " : " + ") + text;
+            if (line.Length > 0 && line.Length + piece.Length > LineWidth)
+            {
+                lines.Add(line.ToString());
+                line.Clear();
+            }
+
+            line.Append(piece);
+        }
+
+        lines.Add(line.ToString());
+        return "\\begin{aligned} &" + string.Join(" \\\\ &\\quad ", lines) + " \\end{aligned}";
+    }
+
+    private static bool IsNegative(Expr term) =>
+        (term.TryGetRational(out var value) && value.Sign < 0)
+        || (term is Product product && product.Factors[0].TryGetRational(out var coefficient) && coefficient.Sign < 0);
 
     public static string Matrix(Matrix3Expr m)
     {
-        var rows = Enumerable.Range(0, 3).Select(r => string.Join(" & ", Enumerable.Range(0, 3).Select(c => LatexPrinter.Print(m[r, c]))));
+        var rows = Enumerable.Range(0, 3).Select(r => string.Join(" & ", Enumerable.Range(0, 3).Select(c => Cell(m[r, c]))));
         return "\\begin{bmatrix} " + string.Join(" \\\\ ", rows) + " \\end{bmatrix}";
     }
 

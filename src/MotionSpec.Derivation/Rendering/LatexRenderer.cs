@@ -34,12 +34,15 @@ internal static class LatexRenderer
                     text.Append(Runs(paragraph.Runs)).Append("\n\n");
                     break;
                 case Equations equations:
-                    text.Append("\\[\n\\begin{aligned}\n");
+                    // align* rather than a displayed aligned block: its rows may break across pages.
+                    text.Append("\\begin{align*}\n");
                     text.Append(string.Join(" \\\\\n", equations.Rows)).Append('\n');
-                    text.Append("\\end{aligned}\n\\]\n\n");
+                    text.Append("\\end{align*}\n\n");
                     break;
                 case Table table:
-                    text.Append("\\begin{center}\n\\begin{tabular}{").Append(new string('l', table.Header.Count)).Append("}\n\\hline\n");
+                    // Paragraph columns sharing the text width, so long source text wraps instead of running off the page.
+                    var column = $"p{{\\dimexpr\\textwidth/{table.Header.Count}-2\\tabcolsep\\relax}}";
+                    text.Append("\\begin{center}\\small\n\\begin{tabular}{").Append(string.Concat(Enumerable.Repeat(column, table.Header.Count))).Append("}\n\\hline\n");
                     text.Append(string.Join(" & ", table.Header.Select(Runs))).Append(" \\\\\n\\hline\n");
                     foreach (var row in table.Rows)
                     {

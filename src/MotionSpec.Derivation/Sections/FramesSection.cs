@@ -111,9 +111,11 @@ internal static class FramesSection
             }
             else
             {
-                rows.Add($"{Tex.In(Tex.Omega(to, observer), basis)} &= {Tex.Omega(from, observer)} + {linkOmega} = {Tex.Column(step.Omega)}");
+                rows.Add($"{Tex.In(Tex.Omega(to, observer), basis)} &= {Tex.Omega(from, observer)} + {linkOmega}");
+                rows.Add($"&= {Tex.Column(step.Omega)}");
                 rows.Add($"{Tex.Omega(from, observer)} \\times {linkOmega} &= {Tex.Column(step.Cross)}");
-                rows.Add($"{Tex.In(Tex.Alpha(to, observer), basis)} &= {Tex.Alpha(from, observer)} + {linkAlpha} + {Tex.Omega(from, observer)} \\times {linkOmega} = {Tex.Column(step.Alpha)}");
+                rows.Add($"{Tex.In(Tex.Alpha(to, observer), basis)} &= {Tex.Alpha(from, observer)} + {linkAlpha} + {Tex.Omega(from, observer)} \\times {linkOmega}");
+                rows.Add($"&= {Tex.Column(step.Alpha)}");
             }
 
             previous = to;

@@ -15,6 +15,6 @@ internal static class IntermediatesSection
 
         blocks.Add(new Heading(1, "Named intermediates"));
         blocks.Add(new Paragraph(new Words("Expressions that recur in the closed forms of the reports, named once so that long chains stay readable. Each uses only inputs and earlier intermediates.")));
-        blocks.Add(new Equations(context.Named.Temporaries.Select(t => $"{LatexPrinter.Print(t.Name)} &= {LatexPrinter.Print(t.Value)}").ToArray()));
+        blocks.Add(new Equations(context.Named.Temporaries.Select(t => $"{LatexPrinter.Print(t.Name)} &= {Tex.Cell(t.Value)}").ToArray()));
     }
 }

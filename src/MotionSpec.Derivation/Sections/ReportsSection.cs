@@ -46,18 +46,21 @@ internal static class ReportsSection
         blocks.Add(new Equations(
         [
             $"{Tex.In("\\mathbf{p}", c)} &= {Tex.Column(context.Printed(index, Quantity.Position))}",
-            $"{Tex.In("\\mathbf{v}", c)} = {Tex.In(Tex.DerivativeIn(a, "\\mathbf{p}"), c)} &= {Tex.Column(context.Printed(index, Quantity.Velocity))}",
+            $"{Tex.In("\\mathbf{v}", c)} &= {Tex.In(Tex.DerivativeIn(a, "\\mathbf{p}"), c)}",
+            $"&= {Tex.Column(context.Printed(index, Quantity.Velocity))}",
         ]));
 
         var rows = new List<string>();
         if (checks.RelativePosition is { } r)
         {
-            rows.Add($"{Tex.In("\\mathbf{r}", c)} = {Tex.In($"\\mathbf{{p}} - \\mathbf{{r}}_{{O_{{{Tex.Name(b)}}}/O_{{{Tex.Name(a)}}}}}", c)} &= {Tex.Column(r)}");
+            rows.Add($"{Tex.In("\\mathbf{r}", c)} &= {Tex.In($"\\mathbf{{p}} - \\mathbf{{r}}_{{O_{{{Tex.Name(b)}}}/O_{{{Tex.Name(a)}}}}}", c)}");
+            rows.Add($"&= {Tex.Column(r)}");
         }
 
         if (checks.RelativeVelocity is { } vRel)
         {
-            rows.Add($"{Tex.In("\\mathbf{v}_{\\mathrm{rel}}", c)} = {Tex.In(Tex.DerivativeIn(b, "\\mathbf{r}"), c)} &= {Tex.Column(vRel)}");
+            rows.Add($"{Tex.In("\\mathbf{v}_{\\mathrm{rel}}", c)} &= {Tex.In(Tex.DerivativeIn(b, "\\mathbf{r}"), c)}");
+            rows.Add($"&= {Tex.Column(vRel)}");
         }
 
         if (checks.Moving is { } moving)
@@ -88,7 +91,8 @@ internal static class ReportsSection
         blocks.Add(new Paragraph(new Words("Their sum, the acceleration of the point as seen in " + a.Name + ":")));
         blocks.Add(new Equations(
         [
-            $"{Tex.In("\\mathbf{a}", c)} = {Tex.In("\\mathbf{a}_{\\mathrm{rel}} + \\mathbf{a}_{\\mathrm{cp}} + \\mathbf{a}_{\\alpha} + \\mathbf{a}_{\\mathrm{Cor}} + \\mathbf{a}_{O}", c)} &= {Tex.Column(context.Printed(index, Quantity.Acceleration))}",
+            $"{Tex.In("\\mathbf{a}", c)} &= {Tex.In("\\mathbf{a}_{\\mathrm{rel}} + \\mathbf{a}_{\\mathrm{cp}} + \\mathbf{a}_{\\alpha} + \\mathbf{a}_{\\mathrm{Cor}} + \\mathbf{a}_{O}", c)}",
+            $"&= {Tex.Column(context.Printed(index, Quantity.Acceleration))}",
         ]));
         blocks.Add(new Items(
         [

@@ -16,6 +16,7 @@ internal static class KatexChecker
 
     public static IReadOnlyList<string> Check(IEnumerable<TexFormulas.Found> formulas)
     {
+        Assert.True(Unavailable is null, "the KaTeX check cannot run: " + Unavailable);
         var input = Path.Combine(Path.GetTempPath(), "motionspec-katex-" + Guid.NewGuid().ToString("N") + ".json");
         File.WriteAllText(input, JsonSerializer.Serialize(formulas.Select(f => new { tex = f.Tex, display = f.Display, where = f.Where })));
         try

@@ -34,23 +34,24 @@ internal static class TexFormulas
         return found;
     }
 
-    /// <summary><c>\[ ... \]</c> blocks and <c>$...$</c> inline.</summary>
+    /// <summary><c>align*</c> blocks (whole, as KaTeX reads them in display mode) and <c>$...$</c> inline.</summary>
     public static List<Found> FromLatex(string latex)
     {
         var found = new List<Found>();
         var lines = latex.Split('\n');
         for (var i = 0; i < lines.Length; i++)
         {
-            if (lines[i] == "\\[")
+            if (lines[i] == "\\begin{align*}")
             {
-                var body = new StringBuilder();
+                var body = new StringBuilder(lines[i]).Append('\n');
                 var start = i + 1;
-                for (i++; i < lines.Length && lines[i] != "\\]"; i++)
+                for (i++; i < lines.Length && lines[i] != "\\end{align*}"; i++)
                 {
                     body.Append(lines[i]).Append('\n');
                 }
 
-                found.Add(new Found(body.ToString(), true, $"latex line {start}"));
+                Assert.True(i < lines.Length, $"align* opened at line {start} is not closed");
+                found.Add(new Found(body.Append(lines[i]).ToString(), true, $"latex line {start}"));
                 continue;
             }
 
