@@ -34,7 +34,7 @@ internal sealed class RandomSpecGenerator(int seed)
         var ordinary = new List<string> { "f0" };
         var parentOf = new Dictionary<string, string>();
         _text.AppendLine("frame f0");
-        var count = 2 + _random.Next(4);
+        var count = 2 + _random.Next(6);
         for (var i = 1; i <= count; i++)
         {
             var name = $"f{i}";
@@ -46,7 +46,7 @@ internal sealed class RandomSpecGenerator(int seed)
                 _text.Append(Invariant($"    origin at [{Length()}, {Length()}, {Length()}]\n"));
             }
 
-            var rotations = _random.Next(3);
+            var rotations = _random.Next(4);
             for (var k = 0; k < rotations; k++)
             {
                 _text.Append(Invariant($"    rotate about {Axes[_random.Next(Axes.Length)]} by {Angle()}\n"));

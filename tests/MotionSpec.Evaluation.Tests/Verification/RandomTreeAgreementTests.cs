@@ -8,7 +8,7 @@ public sealed class RandomTreeAgreementTests(ITestOutputHelper output)
     public static TheoryData<int> Seeds()
     {
         var data = new TheoryData<int>();
-        for (var seed = 1; seed <= 10; seed++)
+        for (var seed = 1; seed <= 24; seed++)
         {
             data.Add(seed);
         }
