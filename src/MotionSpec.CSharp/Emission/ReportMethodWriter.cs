@@ -1,0 +1,62 @@
+using MotionSpec.Kinematics;
+using MotionSpec.Symbolic;
+using Sym = MotionSpec.Symbolic.Symbol;
+
+namespace MotionSpec.CSharp.Emission;
+
+/// <summary>
+/// Writes the method of one report: all 24 (point) or 15 (frame) components have their common factors
+/// pulled out and are then put through common subexpression elimination together, so a sine, a rotation entry or an angular velocity needed by several
+/// outputs is computed once, into a local, before the result is assembled.
+/// </summary>
+internal static class ReportMethodWriter
+{
+    public static EmittedMethod Write(CodeWriter w, ReportMotion motion, string method, NumericType type,
+        IReadOnlyDictionary<Sym, Expr> derivedParams, Func<Sym, string> inputName, Func<string, bool> isTaken)
+    {
+        var number = type == NumericType.Float ? "float" : "double";
+        var outputs = new List<Expr>();
+        foreach (var quantity in motion.Quantities)
+        {
+            foreach (var component in motion[quantity].Components)
+            {
+                outputs.Add(derivedParams.Count == 0 ? component : Substitution.Apply(component, derivedParams));
+            }
+        }
+
+        var program = CommonSubexpressions.Eliminate(new GreedyFactoring().Apply(outputs), "k", isTaken);
+        string Print(Expr e) => MathNames.Qualify(CSharpPrinter.Print(e, type, inputName));
+
+        var report = motion.Report;
+        var isPoint = report.Kind == Language.Binding.ReportKind.Point;
+        var summary = isPoint
+            ? $"Report {report.Name}: point {report.SubjectName} seen from frame {report.Observer.Name}, the five terms taken with respect to frame {report.Via?.Name ?? report.SubjectFrame.Name}, every vector in the basis of {report.Basis.Name}."
+            : $"Report {report.Name}: frame {report.SubjectName} seen from frame {report.Observer.Name}, every vector in the basis of {report.Basis.Name}.";
+        w.Summary(Text.CommentText.Xml(summary));
+        w.Line("/// <param name=\"t\">Time, s.</param>");
+        w.Line("/// <param name=\"s\">The coordinates at time t: values, rates and accelerations in SI units.</param>");
+        w.Line("/// <param name=\"p\">The params in SI units (Parameters.Default holds the spec's values).</param>");
+        w.Line(isPoint
+            ? "/// <returns>Position (m), velocity (m/s), acceleration and its five terms (m/s^2).</returns>"
+            : "/// <returns>Angular velocity (rad/s) and acceleration (rad/s^2); origin position (m), velocity (m/s) and acceleration (m/s^2).</returns>");
+        var resultType = isPoint ? "PointMotion" : "FrameMotion";
+        w.Open($"public static {resultType} {method}({number} t, in State s, in Parameters p)");
+        foreach (var temporary in program.Temporaries)
+        {
+            w.Line($"{number} {temporary.Name.Name} = {Print(temporary.Value)};");
+        }
+
+        w.Line($"return new {resultType}(");
+        for (var v = 0; v < program.Outputs.Count / 3; v++)
+        {
+            var x = Print(program.Outputs[3 * v]);
+            var y = Print(program.Outputs[(3 * v) + 1]);
+            var z = Print(program.Outputs[(3 * v) + 2]);
+            var end = (3 * v) + 3 == program.Outputs.Count ? ");" : ",";
+            w.Line($"    new Vec3({x}, {y}, {z}){end}");
+        }
+
+        w.Close();
+        return new EmittedMethod(report.Name, method, isPoint, program.Temporaries.Count);
+    }
+}

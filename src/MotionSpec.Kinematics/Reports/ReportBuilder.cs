@@ -1,0 +1,119 @@
+using MotionSpec.Kinematics.Frames;
+using MotionSpec.Kinematics.Lowering;
+using MotionSpec.Language.Binding;
+using MotionSpec.Language.Binding.Symbols;
+using MotionSpec.Symbolic;
+
+namespace MotionSpec.Kinematics.Reports;
+
+/// <summary>
+/// Derives the closed forms of one report. For a point P in frame F seen from A, with the five terms taken
+/// relative to B: r = P relative to B's origin, v_rel and a_rel its derivatives taken in B, omega and alpha of B
+/// relative to A; centripetal = omega x (omega x r), angular = alpha x r, coriolis = 2 omega x v_rel, origin = the
+/// second derivative in A of B's origin. Cross products are formed in the basis of each part of r, where they are
+/// simplest, and every result is written in the report's basis at the end.
+/// </summary>
+internal sealed class ReportBuilder(
+    ExpressionLowering lowering,
+    BasisConverter converter,
+    AngularMotion angular,
+    VectorDerivative derivative)
+{
+    // Above this many distinct nodes a closed form is kept as composed (see Tidy).
+    private const int SimplifyNodeLimit = 60;
+
+    private readonly Dictionary<int, FrameVector> _origins = [];
+
+    public ReportMotion Build(ReportSymbol report)
+    {
+        var values = report.Kind == ReportKind.Point ? PointReport(report) : FrameReport(report);
+        var inBasis = values.ToDictionary(p => p.Key, p => p.Value.Map(Tidy));
+        return new ReportMotion(report, report.Kind == ReportKind.Point ? QuantityInfo.PointQuantities : QuantityInfo.FrameQuantities, inBasis);
+    }
+
+    /// <summary>
+    /// Simplifies a closed form an engineer will read. Long chains are left as composed: their shared structure is
+    /// what keeps them linear in size, and hand-style simplification of them costs more than it gives.
+    /// </summary>
+    private static Expr Tidy(Expr e) => ExprMetrics.NodeCount(e) <= SimplifyNodeLimit ? Simplifier.Simplify(e) : e;
+
+    /// <summary>The position of F's origin relative to B's origin, as parts along the tree path.</summary>
+    public FrameVector OriginOffset(FrameSymbol frame, FrameSymbol from)
+    {
+        var ancestor = FrameTree.CommonAncestor(frame, from);
+        var offset = FrameVector.Zero;
+        foreach (var link in FrameTree.PathBelow(ancestor, frame))
+        {
+            offset = offset.Plus(Origin(link));
+        }
+
+        foreach (var link in FrameTree.PathBelow(ancestor, from))
+        {
+            offset = offset.Minus(Origin(link));
+        }
+
+        return offset;
+    }
+
+    /// <summary>A frame's origin relative to its parent, lowered once.</summary>
+    public FrameVector Origin(FrameSymbol frame)
+    {
+        if (!_origins.TryGetValue(frame.Index, out var origin))
+        {
+            origin = frame.Origin is { } written ? lowering.Vector(written) : FrameVector.Zero;
+            _origins[frame.Index] = origin;
+        }
+
+        return origin;
+    }
+
+    private Dictionary<Quantity, Vector3Expr> PointReport(ReportSymbol report)
+    {
+        var point = report.Point!;
+        var frame = point.Frame;
+        var observer = report.Observer;
+        var via = report.Via!;
+        var basis = report.Basis;
+
+        var inFrame = lowering.Vector(point.Position);
+        var fromObserver = inFrame.Plus(OriginOffset(frame, observer));
+        var fromVia = inFrame.Plus(OriginOffset(frame, via));
+
+        var relativeVelocity = derivative.First(fromVia, via);
+        var omega = angular.Velocity(via, observer);
+        var alpha = angular.Acceleration(via, observer);
+        var two = Expr.Number(2);
+
+        // omega and alpha are known in the moving frame's basis; bring them to each part's basis once.
+        FrameVector CrossWith(Vector3Expr w, FrameVector x) =>
+            x.MapParts((b, part) => Vector3Expr.Cross(converter.Convert(w, via, b), part));
+
+        return new Dictionary<Quantity, Vector3Expr>
+        {
+            [Quantity.Position] = converter.ToBasis(fromObserver, basis),
+            [Quantity.Velocity] = converter.ToBasis(derivative.First(fromObserver, observer), basis),
+            [Quantity.Acceleration] = converter.ToBasis(derivative.Second(fromObserver, observer), basis),
+            [Quantity.Relative] = converter.ToBasis(derivative.Second(fromVia, via), basis),
+            [Quantity.Centripetal] = converter.ToBasis(CrossWith(omega, CrossWith(omega, fromVia)), basis),
+            [Quantity.Angular] = converter.ToBasis(CrossWith(alpha, fromVia), basis),
+            [Quantity.Coriolis] = converter.ToBasis(CrossWith(omega, relativeVelocity).Scaled(two), basis),
+            [Quantity.Origin] = converter.ToBasis(derivative.Second(OriginOffset(via, observer), observer), basis),
+        };
+    }
+
+    private Dictionary<Quantity, Vector3Expr> FrameReport(ReportSymbol report)
+    {
+        var frame = report.SubjectFrame;
+        var observer = report.Observer;
+        var basis = report.Basis;
+        var origin = OriginOffset(frame, observer);
+        return new Dictionary<Quantity, Vector3Expr>
+        {
+            [Quantity.AngularVelocity] = converter.Convert(angular.Velocity(frame, observer), frame, basis),
+            [Quantity.AngularAcceleration] = converter.Convert(angular.Acceleration(frame, observer), frame, basis),
+            [Quantity.OriginPosition] = converter.ToBasis(origin, basis),
+            [Quantity.OriginVelocity] = converter.ToBasis(derivative.First(origin, observer), basis),
+            [Quantity.OriginAcceleration] = converter.ToBasis(derivative.Second(origin, observer), basis),
+        };
+    }
+}

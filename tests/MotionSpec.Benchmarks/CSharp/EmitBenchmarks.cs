@@ -1,0 +1,26 @@
+using BenchmarkDotNet.Attributes;
+using MotionSpec.Compiler;
+using MotionSpec.CSharp;
+using MotionSpec.CSharp.Analysis;
+
+namespace MotionSpec.Benchmarks.CSharp;
+
+/// <summary>How long emitting a 32-link arm takes in process: check + emit, and with the Roslyn check as `emit` runs it.</summary>
+[MemoryDiagnoser]
+public class EmitBenchmarks
+{
+    private string _text = string.Empty;
+
+    [GlobalSetup]
+    public void Setup() => _text = ChainSpec.Text(32);
+
+    [Benchmark(Description = "check + emit, 32 links")]
+    public int CheckAndEmit() => CSharpEmitter.Emit(SpecCompiler.Check("arm32.motion", _text), new CSharpEmitOptions()).Code!.Length;
+
+    [Benchmark(Description = "check + emit + Roslyn check, 32 links")]
+    public int CheckEmitAndCompile()
+    {
+        var code = CSharpEmitter.Emit(SpecCompiler.Check("arm32.motion", _text), new CSharpEmitOptions()).Code!;
+        return EmittedCodeCheck.Check(code).Findings.Count;
+    }
+}
