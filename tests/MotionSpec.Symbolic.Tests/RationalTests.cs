@@ -66,5 +66,7 @@ public class RationalTests
         Assert.Equal(0.0, new Rational(1, BigInteger.Pow(10, 400)).ToDouble());
         // The smallest subnormal, 2^-1074 (IEEE 754 binary64).
         Assert.Equal(double.Epsilon, new Rational(1, BigInteger.Pow(2, 1074)).ToDouble());
+        Assert.Equal(double.Epsilon, new Rational(3, BigInteger.Pow(2, 1076)).ToDouble());
+        Assert.Equal(0.0, new Rational(1, BigInteger.Pow(2, 1075)).ToDouble());
     }
 }

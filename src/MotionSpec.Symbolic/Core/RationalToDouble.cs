@@ -42,7 +42,10 @@ internal static class RationalToDouble
         long precision = exponent >= -1022 ? 53 : 53 - (-1022 - exponent);
         if (precision <= 0)
         {
-            return negative ? -0.0 : 0.0;
+            // Below the smallest subnormal: round to it only when strictly above half of it.
+            bool aboveHalf = precision == 0 && (sticky || q != (BigInteger.One << (int)(bits - 1)));
+            double tiny = aboveHalf ? double.Epsilon : 0.0;
+            return negative ? -tiny : tiny;
         }
 
         long drop = bits - precision;
