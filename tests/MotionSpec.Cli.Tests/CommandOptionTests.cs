@@ -1,8 +1,9 @@
 namespace MotionSpec.Cli.Tests;
 
 /// <summary>
-/// The option sets of the commands whose stages are not wired in yet: the contract's spellings parse, and a
-/// wrong value or option is a command-line error (exit 2) before the command runs.
+/// The option sets of the commands: the contract's spellings parse and the command goes on to read its file
+/// (missing here, so exit 2 from the loader), while a wrong value or option is a command-line error (exit 2)
+/// before any file is read.
 /// </summary>
 public sealed class CommandOptionTests
 {
@@ -13,12 +14,12 @@ public sealed class CommandOptionTests
     [InlineData("derive", "x.motion", "-o", "out.md", "--format", "latex")]
     [InlineData("plot", "x.motion", "--report", "tipInQuay", "--t", "0:0.1:5", "--set", "L=20 m", "-o", "out.svg")]
     [InlineData("verify", "x.motion")]
-    public void Contract_command_lines_parse_and_reach_the_placeholder(params string[] args)
+    public void Contract_command_lines_parse_and_reach_the_file_loader(params string[] args)
     {
         var run = CliRun.Of(args);
 
         Assert.Equal(ExitCodes.Usage, run.ExitCode);
-        Assert.Equal($"motionspec {args[0]}: coming in a later change", Assert.Single(run.StderrLines));
+        Assert.StartsWith("motionspec: cannot read 'x.motion'", Assert.Single(run.StderrLines), StringComparison.Ordinal);
         Assert.Equal(string.Empty, run.Stdout);
     }
 
@@ -35,7 +36,7 @@ public sealed class CommandOptionTests
         var run = CliRun.Of(args);
 
         Assert.Equal(ExitCodes.Usage, run.ExitCode);
-        Assert.DoesNotContain("coming in a later change", run.Stderr, StringComparison.Ordinal);
+        Assert.DoesNotContain("cannot read", run.Stderr, StringComparison.Ordinal);
         Assert.NotEmpty(run.StderrLines);
         Assert.Equal(string.Empty, run.Stdout);
     }

@@ -42,6 +42,11 @@ internal sealed class Binder
     public static BoundSpec Bind(SourceText source, SpecSyntax syntax, DiagnosticBag diagnostics)
     {
         var binder = new Binder(source, diagnostics);
+        foreach (var broken in syntax.BrokenDeclarations)
+        {
+            binder._scope.AddBroken(broken.Text);
+        }
+
         foreach (var statement in syntax.Statements)
         {
             binder.BindStatement(statement);
@@ -121,6 +126,13 @@ internal sealed class Binder
     {
         var parent = syntax.Parent is { } parentName ? _expressions.ResolveFrame(parentName) : null;
         var free = IsFree(syntax.Name);
+        if (syntax.Parent is not null && parent is null)
+        {
+            // Its parent is already reported; taken as a root it would only cause derived errors later.
+            _scope.AddBroken(syntax.Name.Text);
+            free = false;
+        }
+
         _frameCount++;
         if (_frameCount == Limits.Frames + 1)
         {
@@ -306,7 +318,11 @@ internal sealed class Binder
             _expressions.RequirePlace(position, true, Dimension.LengthDimension, "point ... at");
         }
 
-        if (IsFree(syntax.Name) && frame is not null)
+        if (frame is null)
+        {
+            _scope.AddBroken(syntax.Name.Text);
+        }
+        else if (IsFree(syntax.Name))
         {
             var symbol = new PointSymbol(syntax.Name.Text, syntax.Name.Span, syntax.Span, _points.Count, frame, position);
             _points.Add(symbol);
@@ -333,6 +349,8 @@ internal sealed class Binder
                 break;
             case FrameSymbol f:
                 subjectFrame = f;
+                break;
+            case null when _scope.IsBroken(syntax.Subject.Text):
                 break;
             case null:
                 var close = NameSuggestions.Closest(syntax.Subject.Text, _scope.InOrder.Where(s => s is PointSymbol or FrameSymbol));

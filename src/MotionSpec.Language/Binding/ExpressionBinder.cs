@@ -144,6 +144,11 @@ internal sealed class ExpressionBinder(Scope scope, DiagnosticBag diagnostics)
         var symbol = scope.Find(name.Name);
         if (symbol is null)
         {
+            if (scope.IsBroken(name.Name))
+            {
+                return new BoundErrorExpr(name.Span, false);
+            }
+
             if (scope.IsFrameUnderConstruction(name.Name))
             {
                 diagnostics.Error(LanguageDiagnosticCodes.FrameInOwnBlock, name.Span, $"frame '{name.Name}' is not in scope inside its own block");
@@ -549,6 +554,8 @@ internal sealed class ExpressionBinder(Scope scope, DiagnosticBag diagnostics)
         {
             case FrameSymbol frame:
                 return frame;
+            case null when scope.IsBroken(name.Text):
+                return null;
             case null when scope.IsFrameUnderConstruction(name.Text):
                 diagnostics.Error(LanguageDiagnosticCodes.FrameInOwnBlock, name.Span, $"frame '{name.Text}' is not in scope inside its own block");
                 return null;

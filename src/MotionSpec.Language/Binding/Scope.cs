@@ -10,6 +10,7 @@ internal sealed class Scope
 {
     private readonly Dictionary<string, Symbol> _byName = new(StringComparer.Ordinal);
     private readonly List<Symbol> _inOrder = [];
+    private readonly HashSet<string> _broken = new(StringComparer.Ordinal);
 
     /// <summary>The frame whose block is being bound, if any.</summary>
     public FrameSymbol? FrameUnderConstruction { get; set; }
@@ -26,6 +27,12 @@ internal sealed class Scope
         _byName.Add(symbol.Name, symbol);
         _inOrder.Add(symbol);
     }
+
+    /// <summary>Marks a name whose declaration failed to parse: it is already reported.</summary>
+    public void AddBroken(string name) => _broken.Add(name);
+
+    /// <summary>True when the name's declaration failed to parse (and no valid declaration exists).</summary>
+    public bool IsBroken(string name) => _broken.Contains(name) && !_byName.ContainsKey(name);
 
     /// <summary>True when the name is the frame whose block is being bound.</summary>
     public bool IsFrameUnderConstruction(string name) =>

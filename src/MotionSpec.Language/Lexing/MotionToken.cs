@@ -128,6 +128,7 @@ internal enum MotionToken
     [Token(Example = "=")]
     Equals,
 
+    /// <summary><c>:</c>, the last kind: parsers size their tables by it.</summary>
     [Token(Example = ":")]
     Colon,
 }

@@ -88,8 +88,8 @@ internal sealed class MotionTokenizer : Tokenizer<MotionToken>
 
             if (kind is { } found)
             {
-                var startSpan = cursor.Skip(start - cursor.Position.Absolute);
-                cursor = startSpan.Skip(position - start);
+                var startSpan = At(text, start);
+                cursor = At(text, position);
                 yield return Result.Value(found, startSpan, cursor);
                 if (found == MotionToken.Number)
                 {
@@ -106,6 +106,10 @@ internal sealed class MotionTokenizer : Tokenizer<MotionToken>
             ReportBadCharacters(text, badRunStart, end);
         }
     }
+
+    // Superpower keeps a line and column in each position, used only in its own messages; ours come from
+    // SourceText, so the column here is a placeholder and walking the text character by character is avoided.
+    private static SpanOfText At(string text, int offset) => new(text, new Position(offset, 1, offset + 1), text.Length - offset);
 
     private static MotionToken? Punctuation(char c) => c switch
     {
@@ -215,7 +219,7 @@ internal sealed class MotionTokenizer : Tokenizer<MotionToken>
     private static IEnumerable<Result<MotionToken>> LexUnitAfterNumber(string text, ref int position, int end, ref SpanOfText cursor)
     {
         var look = position;
-        while (look < end && (text[look] == ' ' || text[look] == '\t' || text[look] == '\r' || text[look] == '\n'))
+        while (look < end && (text[look] == ' ' || text[look] == '\t'))
         {
             look++;
         }
@@ -233,8 +237,8 @@ internal sealed class MotionTokenizer : Tokenizer<MotionToken>
         }
 
         var length = Math.Min(UnitText.UnitLength(text, look), end - look);
-        var startSpan = cursor.Skip(look - cursor.Position.Absolute);
-        cursor = startSpan.Skip(length);
+        var startSpan = At(text, look);
+        cursor = At(text, look + length);
         position = look + length;
         return [Result.Value(MotionToken.Unit, startSpan, cursor)];
     }

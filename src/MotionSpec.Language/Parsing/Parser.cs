@@ -17,11 +17,14 @@ internal static class Parser
     public static SpecSyntax Parse(string text, Token<MotionToken>[] tokens, IReadOnlyList<LexicalError> lexicalErrors, DiagnosticBag diagnostics)
     {
         var statements = new List<StatementSyntax>();
+        var broken = new List<IdentifierSyntax>();
         var segments = Segments(tokens);
         OpenFrame? open = null;
 
-        foreach (var (start, count) in segments)
+        for (var index = 0; index < segments.Count; index++)
         {
+            var (start, count) = segments[index];
+            var regionEnd = index + 1 < segments.Count ? tokens[segments[index + 1].Start].Span.Position.Absolute : text.Length;
             var first = tokens[start];
             var firstSpan = SpanOf(first);
             if (first.Kind == MotionToken.LeftBrace)
@@ -86,7 +89,7 @@ internal static class Parser
                 open = Finish(open, statements);
                 diagnostics.Error(LanguageDiagnosticCodes.MisplacedFrameItem, firstSpan,
                     $"'{first.ToStringValue()}' belongs inside a frame's block: frame NAME in PARENT {{ {first.ToStringValue()} ... }}");
-                ParseSegment(text, tokens, start, count, lexicalErrors, diagnostics);
+                ParseSegment(tokens, start, count, regionEnd, lexicalErrors, diagnostics);
                 continue;
             }
 
@@ -97,7 +100,12 @@ internal static class Parser
                 continue;
             }
 
-            var node = ParseSegment(text, tokens, start, count, lexicalErrors, diagnostics);
+            var node = ParseSegment(tokens, start, count, regionEnd, lexicalErrors, diagnostics);
+            if (node is null && count > 1 && tokens[start + 1].Kind == MotionToken.Identifier && first.Kind is not (MotionToken.Report or MotionToken.Title))
+            {
+                broken.Add(new IdentifierSyntax(SpanOf(tokens[start + 1]), tokens[start + 1].ToStringValue()));
+            }
+
             switch (node)
             {
                 case FrameItemSyntax item:
@@ -124,7 +132,7 @@ internal static class Parser
 
         Finish(open, statements);
         var end = tokens.Length == 0 ? 0 : tokens[tokens.Length - 1].Span.Position.Absolute + tokens[tokens.Length - 1].Span.Length;
-        return new SpecSyntax(new TextSpan(0, end), statements);
+        return new SpecSyntax(new TextSpan(0, end), statements, broken);
     }
 
     private static OpenFrame? Finish(OpenFrame? open, List<StatementSyntax> statements)
@@ -140,7 +148,7 @@ internal static class Parser
         return null;
     }
 
-    private static SyntaxNode? ParseSegment(string text, Token<MotionToken>[] tokens, int start, int count, IReadOnlyList<LexicalError> lexicalErrors, DiagnosticBag diagnostics)
+    private static SyntaxNode? ParseSegment(Token<MotionToken>[] tokens, int start, int count, int regionEnd, IReadOnlyList<LexicalError> lexicalErrors, DiagnosticBag diagnostics)
     {
         var segmentStart = tokens[start].Span.Position.Absolute;
         var last = tokens[start + count - 1];
@@ -169,7 +177,9 @@ internal static class Parser
             return result.Value;
         }
 
-        var explained = lexicalErrors.Any(e => e.Span.Start >= segmentStart && e.Span.Start < segmentEnd);
+        // A bad character or literal in this statement's stretch of text (up to the next statement) already says
+        // what is wrong; a second, derived syntax error would only confuse.
+        var explained = lexicalErrors.Any(e => e.Span.Start >= segmentStart && e.Span.Start < regionEnd);
         if (!explained)
         {
             var at = result.ErrorPosition.HasValue ? result.ErrorPosition.Absolute : segmentEnd;
@@ -189,17 +199,44 @@ internal static class Parser
                 length = 0;
             }
 
-            diagnostics.Error(LanguageDiagnosticCodes.SyntaxError, new TextSpan(at, length), Describe(result.FormatErrorMessageFragment(), tokens[start]));
+            diagnostics.Error(LanguageDiagnosticCodes.SyntaxError, new TextSpan(at, length), Describe(result.FormatErrorMessageFragment(), tokens, start, count, at));
         }
 
         return null;
     }
 
-    private static string Describe(string fragment, Token<MotionToken> keyword)
+    private static string Describe(string fragment, Token<MotionToken>[] tokens, int start, int count, int at)
     {
+        var keyword = tokens[start];
         var message = fragment.TrimEnd('.').Replace("end of input", "end of statement");
-        return $"in this '{keyword.ToStringValue()}' statement: {message}";
+        var hint = string.Empty;
+        for (var i = start + 1; i < start + count; i++)
+        {
+            if (tokens[i].Span.Position.Absolute != at)
+            {
+                continue;
+            }
+
+            var kind = tokens[i].Kind;
+            var previous = tokens[i - 1].Kind;
+            if (keyword.Kind == MotionToken.Report && kind is MotionToken.Via or MotionToken.Basis or MotionToken.As)
+            {
+                hint = "; the clauses of a report come in the order via, basis, as, each at most once";
+            }
+            else if (EndsOperand(previous) && kind is MotionToken.Identifier or MotionToken.Number or MotionToken.LeftParen
+                         or MotionToken.Function or MotionToken.Time or MotionToken.Pi or MotionToken.LeftBracket)
+            {
+                hint = "; there is no implicit multiplication: write '*' between the factors";
+            }
+
+            break;
+        }
+
+        return $"in this '{keyword.ToStringValue()}' statement: {message}{hint}";
     }
+
+    private static bool EndsOperand(MotionToken kind) => kind is MotionToken.Number or MotionToken.Unit or MotionToken.Identifier
+        or MotionToken.Mark or MotionToken.Time or MotionToken.Pi or MotionToken.RightParen or MotionToken.RightBracket;
 
     private static string Shorten(string text) => text.Length > 20 ? text.Remove(17) + "..." : text;
 

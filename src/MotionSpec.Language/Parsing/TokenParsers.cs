@@ -52,10 +52,12 @@ internal static class TokenParsers
 
     /// <summary><c>9.81 m/s^2</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Number =
-        from number in Token.EqualTo(MotionToken.Number)
-        from unit in Token.EqualTo(MotionToken.Unit).OptionalOrDefault()
-        select unit.HasValue
-            ? (ExpressionSyntax)new NumberSyntax(TextSpan.Cover(SpanOf(number), SpanOf(unit)), number.ToStringValue(), SpanOf(number), new UnitSyntax(SpanOf(unit), unit.ToStringValue()))
+        Parse.Sequence(Token.EqualTo(MotionToken.Number), Token.EqualTo(MotionToken.Unit).OptionalOrDefault())
+        .Select(p => (ExpressionSyntax)MakeNumber(p.Item1, p.Item2));
+
+    private static NumberSyntax MakeNumber(Token<MotionToken> number, Token<MotionToken> unit) =>
+        unit.HasValue
+            ? new NumberSyntax(TextSpan.Cover(SpanOf(number), SpanOf(unit)), number.ToStringValue(), SpanOf(number), new UnitSyntax(SpanOf(unit), unit.ToStringValue()))
             : new NumberSyntax(SpanOf(number), number.ToStringValue(), SpanOf(number), null);
 
     /// <summary><c>t</c>.</summary>
@@ -68,10 +70,13 @@ internal static class TokenParsers
 
     /// <summary><c>psi</c>, <c>psi'</c>, <c>psi''</c> or <c>boom.x</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> NameOrUnitVector =
-        from name in Token.EqualTo(MotionToken.Identifier)
-        from suffix in Optional(Dot.IgnoreThen(AxisName).Select(axis => (object)axis)
-            .Or(Token.EqualTo(MotionToken.Mark).Select(mark => (object)mark)))
-        select suffix switch
+        Parse.Sequence(
+                Token.EqualTo(MotionToken.Identifier),
+                Optional(Dot.IgnoreThen(AxisName).Select(axis => (object)axis).Or(Token.EqualTo(MotionToken.Mark).Select(mark => (object)mark))))
+            .Select(p => MakeName(p.Item1, p.Item2));
+
+    private static ExpressionSyntax MakeName(Token<MotionToken> name, object? suffix) =>
+        suffix switch
         {
             IdentifierSyntax axis => (ExpressionSyntax)new UnitVectorSyntax(
                 TextSpan.Cover(SpanOf(name), axis.Span), new IdentifierSyntax(SpanOf(name), name.ToStringValue()), axis),
@@ -81,55 +86,50 @@ internal static class TokenParsers
 
     /// <summary><c>sin(x)</c>, <c>atan2(y, x)</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Call =
-        from function in Token.EqualTo(MotionToken.Function)
-        from open in LeftParen
-        from arguments in Parse.Ref(() => Expression!).ManyDelimitedBy(Comma)
-        from close in RightParen
-        select (ExpressionSyntax)new CallSyntax(
-            TextSpan.Cover(SpanOf(function), SpanOf(close)),
-            new IdentifierSyntax(SpanOf(function), function.ToStringValue()),
-            arguments);
+        Parse.Sequence(Token.EqualTo(MotionToken.Function), LeftParen, Parse.Ref(() => Expression!).ManyDelimitedBy(Comma), RightParen)
+            .Select(p => (ExpressionSyntax)new CallSyntax(
+                TextSpan.Cover(SpanOf(p.Item1), SpanOf(p.Item4)),
+                new IdentifierSyntax(SpanOf(p.Item1), p.Item1.ToStringValue()),
+                p.Item3));
 
     /// <summary><c>(a + b)</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Parenthesized =
-        from open in LeftParen
-        from inner in Parse.Ref(() => Expression!)
-        from close in RightParen
-        select (ExpressionSyntax)new ParenthesizedSyntax(TextSpan.Cover(SpanOf(open), SpanOf(close)), inner);
+        Parse.Sequence(LeftParen, Parse.Ref(() => Expression!), RightParen)
+            .Select(p => (ExpressionSyntax)new ParenthesizedSyntax(TextSpan.Cover(SpanOf(p.Item1), SpanOf(p.Item3)), p.Item2));
 
     /// <summary><c>[e1, e2, e3]</c> with an optional <c>in F</c> binding tighter than any operator.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Bracket =
-        from open in LeftBracket
-        from components in Parse.Ref(() => Expression!).ManyDelimitedBy(Comma)
-            .Where(c => c.Length == 3, "three components")
-        from close in RightBracket
-        from basis in Optional(InKeyword.IgnoreThen(Identifier))
-        select (ExpressionSyntax)new BracketSyntax(
-            TextSpan.Cover(SpanOf(open), basis?.Span ?? SpanOf(close)), components, basis);
+        Parse.Sequence(
+                LeftBracket,
+                Parse.Ref(() => Expression!).ManyDelimitedBy(Comma).Where(c => c.Length == 3, "three components"),
+                RightBracket,
+                Optional(InKeyword.IgnoreThen(Identifier)))
+            .Select(p => (ExpressionSyntax)new BracketSyntax(TextSpan.Cover(SpanOf(p.Item1), p.Item4?.Span ?? SpanOf(p.Item3)), p.Item2, p.Item4));
 
     /// <summary>Anything that binds tighter than <c>^</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Primary =
-        Number.Or(Time).Or(Pi).Or(NameOrUnitVector).Or(Call).Or(Parenthesized).Or(Bracket).Named("expression");
+        ByFirstToken(
+            "expression",
+            (MotionToken.Number, Number),
+            (MotionToken.Time, Time),
+            (MotionToken.Pi, Pi),
+            (MotionToken.Identifier, NameOrUnitVector),
+            (MotionToken.Function, Call),
+            (MotionToken.LeftParen, Parenthesized),
+            (MotionToken.LeftBracket, Bracket));
 
     /// <summary><c>a^b</c>, right-associative; the exponent may begin with unary minus (<c>x^-2</c>).</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Power =
-        from @base in Primary
-        from exponent in Optional(Caret.IgnoreThen(Parse.Ref(() => Exponent!)))
-        select exponent is null ? @base : new PowerSyntax(TextSpan.Cover(@base.Span, exponent.Span), @base, exponent);
+        Parse.Sequence(Primary, Optional(Caret.IgnoreThen(Parse.Ref(() => Exponent!))))
+            .Select(p => p.Item2 is null ? p.Item1 : new PowerSyntax(TextSpan.Cover(p.Item1.Span, p.Item2.Span), p.Item1, p.Item2));
 
     /// <summary>The exponent of <c>^</c>: a power, or a negated exponent.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Exponent =
-        (from minus in Minus
-         from operand in Parse.Ref(() => Exponent!)
-         select (ExpressionSyntax)new NegateSyntax(TextSpan.Cover(SpanOf(minus), operand.Span), operand))
-        .Or(Power);
+        Parse.Sequence(Minus, Parse.Ref(() => Exponent!)).Select(Negate).Or(Power);
 
     /// <summary><c>-a</c>: binds looser than <c>^</c>, so <c>-x^2</c> is <c>-(x^2)</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Unary =
-        (from minus in Minus
-         from operand in Parse.Ref(() => Unary!)
-         select (ExpressionSyntax)new NegateSyntax(TextSpan.Cover(SpanOf(minus), operand.Span), operand))
-        .Or(Power);
+        Parse.Sequence(Minus, Parse.Ref(() => Unary!)).Select(Negate).Or(Power);
 
     /// <summary><c>a * b</c>, <c>a / b</c>, left-associative.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Product =
@@ -147,11 +147,8 @@ internal static class TokenParsers
 
     /// <summary><c>param L = 18 m</c>.</summary>
     private static readonly TokenListParser<MotionToken, SyntaxNode> Param =
-        from keyword in Token.EqualTo(MotionToken.Param)
-        from name in Identifier
-        from eq in EqualsSign
-        from definition in Expression
-        select (SyntaxNode)new ParamSyntax(TextSpan.Cover(SpanOf(keyword), definition.Span), name, definition);
+        Parse.Sequence(Token.EqualTo(MotionToken.Param), Identifier, EqualsSign, Expression)
+            .Select(p => (SyntaxNode)new ParamSyntax(TextSpan.Cover(SpanOf(p.Item1), p.Item4.Span), p.Item2, p.Item4));
 
     /// <summary><c>angle</c> or <c>length</c>.</summary>
     private static readonly TokenListParser<MotionToken, (CoordKind Kind, TextSpan Span)> CoordKindName =
@@ -169,11 +166,8 @@ internal static class TokenParsers
 
     /// <summary><c>let yaw = w * t + psi</c>.</summary>
     private static readonly TokenListParser<MotionToken, SyntaxNode> Let =
-        from keyword in Token.EqualTo(MotionToken.Let)
-        from name in Identifier
-        from eq in EqualsSign
-        from definition in Expression
-        select (SyntaxNode)new LetSyntax(TextSpan.Cover(SpanOf(keyword), definition.Span), name, definition);
+        Parse.Sequence(Token.EqualTo(MotionToken.Let), Identifier, EqualsSign, Expression)
+            .Select(p => (SyntaxNode)new LetSyntax(TextSpan.Cover(SpanOf(p.Item1), p.Item4.Span), p.Item2, p.Item4));
 
     /// <summary><c>frame boom in quay</c>; the block that may follow is assembled by <see cref="Parser"/>.</summary>
     private static readonly TokenListParser<MotionToken, SyntaxNode> FrameHeader =
@@ -210,34 +204,65 @@ internal static class TokenParsers
 
     /// <summary><c>point tip in hook at [0, 0, -L/3]</c>.</summary>
     private static readonly TokenListParser<MotionToken, SyntaxNode> Point =
-        from keyword in Token.EqualTo(MotionToken.Point)
-        from name in Identifier
-        from @in in InKeyword
-        from frame in Identifier
-        from at in AtKeyword
-        from position in Expression
-        select (SyntaxNode)new PointSyntax(TextSpan.Cover(SpanOf(keyword), position.Span), name, frame, position);
+        Parse.Sequence(Parse.Sequence(Token.EqualTo(MotionToken.Point), Identifier, InKeyword, Identifier, AtKeyword), Expression)
+            .Select(p => (SyntaxNode)new PointSyntax(TextSpan.Cover(SpanOf(p.Item1.Item1), p.Item2.Span), p.Item1.Item2, p.Item1.Item4, p.Item2));
 
     /// <summary><c>report tip in quay via trolley basis boom as tipLoad</c>, clauses in that order.</summary>
     private static readonly TokenListParser<MotionToken, SyntaxNode> Report =
-        from keyword in Token.EqualTo(MotionToken.Report)
-        from subject in Identifier
-        from @in in InKeyword
-        from observer in Identifier
-        from via in Optional(ViaKeyword.IgnoreThen(Identifier))
-        from basis in Optional(BasisKeyword.IgnoreThen(Identifier))
-        from alias in Optional(AsKeyword.IgnoreThen(Identifier))
-        select (SyntaxNode)new ReportSyntax(
-            TextSpan.Cover(SpanOf(keyword), (alias ?? basis ?? via ?? observer).Span), subject, observer, via, basis, alias);
+        Parse.Sequence(
+                Parse.Sequence(Token.EqualTo(MotionToken.Report), Identifier, InKeyword, Identifier),
+                Optional(ViaKeyword.IgnoreThen(Identifier)),
+                Optional(BasisKeyword.IgnoreThen(Identifier)),
+                Optional(AsKeyword.IgnoreThen(Identifier)))
+            .Select(p => (SyntaxNode)new ReportSyntax(
+                TextSpan.Cover(SpanOf(p.Item1.Item1), (p.Item4 ?? p.Item3 ?? p.Item2 ?? p.Item1.Item4).Span),
+                p.Item1.Item2, p.Item1.Item4, p.Item2, p.Item3, p.Item4));
 
     /// <summary>One statement, which must use every token it is given.</summary>
     public static readonly TokenListParser<MotionToken, SyntaxNode> Statement =
-        Title.Or(Param).Or(Coord).Or(Let).Or(FrameHeader).Or(Rotate).Or(Origin).Or(Spin).Or(Point).Or(Report)
-            .Named("statement")
-            .AtEnd();
+        ByFirstToken(
+            "statement",
+            (MotionToken.Title, Title),
+            (MotionToken.Param, Param),
+            (MotionToken.Coord, Coord),
+            (MotionToken.Let, Let),
+            (MotionToken.Frame, FrameHeader),
+            (MotionToken.Rotate, Rotate),
+            (MotionToken.Origin, Origin),
+            (MotionToken.Spin, Spin),
+            (MotionToken.Point, Point),
+            (MotionToken.Report, Report))
+        .AtEnd();
+
+    /// <summary>
+    /// The same as trying each alternative in turn with <c>Or</c>, since each begins with its own token, but it
+    /// picks the one alternative directly: trying and failing allocates, and specs can have 100,000 statements.
+    /// </summary>
+    private static TokenListParser<MotionToken, T> ByFirstToken<T>(string expectation, params (MotionToken First, TokenListParser<MotionToken, T> Parser)[] alternatives)
+    {
+        var table = new TokenListParser<MotionToken, T>?[(int)MotionToken.Colon + 1];
+        foreach (var (first, parser) in alternatives)
+        {
+            table[(int)first] = parser;
+        }
+
+        return input =>
+        {
+            var next = input.ConsumeToken();
+            if (next.HasValue && table[(int)next.Value.Kind] is { } chosen)
+            {
+                return chosen(input);
+            }
+
+            return TokenListParserResult.Empty<MotionToken, T>(input, [expectation]);
+        };
+    }
 
     private static TokenListParser<MotionToken, T?> Optional<T>(TokenListParser<MotionToken, T> parser)
         where T : class => parser.Select(value => (T?)value).OptionalOrDefault();
+
+    private static ExpressionSyntax Negate((Token<MotionToken> Minus, ExpressionSyntax Operand) p) =>
+        new NegateSyntax(TextSpan.Cover(SpanOf(p.Minus), p.Operand.Span), p.Operand);
 
     private static ExpressionSyntax MakeBinary(Token<MotionToken> op, ExpressionSyntax left, ExpressionSyntax right) =>
         new BinarySyntax(TextSpan.Cover(left.Span, right.Span), op.Span.Source![op.Span.Position.Absolute], SpanOf(op), left, right);

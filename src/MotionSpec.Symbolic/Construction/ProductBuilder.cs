@@ -6,13 +6,15 @@ namespace MotionSpec.Symbolic;
 /// </summary>
 internal static class ProductBuilder
 {
+    // Below this many distinct bases a linear scan beats a dictionary.
+    private const int ScanLimit = 12;
+
     public static Expr Build(IEnumerable<Expr> factors)
     {
         var coefficient = Rational.One;
-        var index = new Dictionary<Expr, int>();
-        var bases = new List<Expr>();
-        var exponents = new List<Rational>();
-        var pending = new Stack<Expr>();
+        Dictionary<Expr, int>? index = null;
+        var bases = new List<Expr>(4);
+        var exponents = new List<Rational>(4);
 
         foreach (var factor in factors)
         {
@@ -21,48 +23,82 @@ internal static class ProductBuilder
                 throw new ArgumentException("A product factor is null.", nameof(factors));
             }
 
-            pending.Push(factor);
-            while (pending.Count > 0)
+            if (factor is Product p)
             {
-                var f = pending.Pop();
-                switch (f)
+                // Factors of a canonical product are never products themselves.
+                foreach (var inner in p.Children)
                 {
-                    case Number n:
-                        if (n.Value.IsZero)
-                        {
-                            return Nodes.Zero;
-                        }
-
-                        coefficient *= n.Value;
-                        break;
-                    case Product p:
-                        foreach (var inner in p.Children)
-                        {
-                            pending.Push(inner);
-                        }
-
-                        break;
-                    case Power pw:
-                        AddFactor(pw.Base, pw.Exponent);
-                        break;
-                    default:
-                        AddFactor(f, Rational.One);
-                        break;
+                    if (!Take(inner))
+                    {
+                        return Nodes.Zero;
+                    }
                 }
+            }
+            else if (!Take(factor))
+            {
+                return Nodes.Zero;
+            }
+        }
+
+        bool Take(Expr f)
+        {
+            switch (f)
+            {
+                case Number n:
+                    if (n.Value.IsZero)
+                    {
+                        return false;
+                    }
+
+                    coefficient *= n.Value;
+                    return true;
+                case Power pw:
+                    AddFactor(pw.Base, pw.Exponent);
+                    return true;
+                default:
+                    AddFactor(f, Rational.One);
+                    return true;
             }
         }
 
         void AddFactor(Expr b, Rational e)
         {
-            if (index.TryGetValue(b, out int at))
+            int at = -1;
+            if (index is not null)
             {
-                exponents[at] += e;
+                if (!index.TryGetValue(b, out at))
+                {
+                    at = -1;
+                }
             }
             else
             {
-                index.Add(b, bases.Count);
-                bases.Add(b);
-                exponents.Add(e);
+                for (int i = 0; i < bases.Count; i++)
+                {
+                    if (ReferenceEquals(bases[i], b))
+                    {
+                        at = i;
+                        break;
+                    }
+                }
+            }
+
+            if (at >= 0)
+            {
+                exponents[at] += e;
+                return;
+            }
+
+            index?.Add(b, bases.Count);
+            bases.Add(b);
+            exponents.Add(e);
+            if (index is null && bases.Count > ScanLimit)
+            {
+                index = new Dictionary<Expr, int>(bases.Count * 2);
+                for (int i = 0; i < bases.Count; i++)
+                {
+                    index.Add(bases[i], i);
+                }
             }
         }
 
@@ -145,7 +181,7 @@ internal static class ProductBuilder
             }
         }
 
-        settled.Sort((x, y) =>
+        settled.Sort(static (x, y) =>
         {
             int c = ExprOrder.Compare(x.Base, y.Base);
             return c != 0 ? c : x.Exponent.CompareTo(y.Exponent);

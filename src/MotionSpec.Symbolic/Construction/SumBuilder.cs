@@ -3,34 +3,12 @@ namespace MotionSpec.Symbolic;
 /// <summary>Builds canonical sums: flattened, like terms combined by coefficient, sorted, constants folded.</summary>
 internal static class SumBuilder
 {
+    // Below this many distinct terms a linear scan beats a dictionary.
+    private const int ScanLimit = 12;
+
     public static Expr Build(IEnumerable<Expr> terms)
     {
-        var constant = Rational.Zero;
-        var index = new Dictionary<Expr, int>();
-        var rests = new List<Expr>();
-        var coefficients = new List<Rational>();
-
-        void Add(Expr term)
-        {
-            if (term is Number n)
-            {
-                constant += n.Value;
-                return;
-            }
-
-            var (c, rest) = Split(term);
-            if (index.TryGetValue(rest, out int at))
-            {
-                coefficients[at] += c;
-            }
-            else
-            {
-                index.Add(rest, rests.Count);
-                rests.Add(rest);
-                coefficients.Add(c);
-            }
-        }
-
+        var acc = new Accumulator();
         foreach (var term in terms)
         {
             if (term is null)
@@ -42,48 +20,16 @@ internal static class SumBuilder
             {
                 foreach (var inner in s.Children)
                 {
-                    Add(inner);
+                    acc.Add(inner);
                 }
             }
             else
             {
-                Add(term);
+                acc.Add(term);
             }
         }
 
-        var pairs = new List<(Expr Term, Rational Coefficient)>(rests.Count);
-        for (int i = 0; i < rests.Count; i++)
-        {
-            if (!coefficients[i].IsZero)
-            {
-                pairs.Add((rests[i], coefficients[i]));
-            }
-        }
-
-        if (pairs.Count == 0)
-        {
-            return Number.Create(constant);
-        }
-
-        if (pairs.Count == 1 && constant.IsZero)
-        {
-            return ProductBuilder.Scale(pairs[0].Term, pairs[0].Coefficient);
-        }
-
-        pairs.Sort((x, y) => ExprOrder.Compare(x.Term, y.Term));
-        var result = new Expr[pairs.Count + (constant.IsZero ? 0 : 1)];
-        int k = 0;
-        if (!constant.IsZero)
-        {
-            result[k++] = Number.Create(constant);
-        }
-
-        foreach (var (rest, c) in pairs)
-        {
-            result[k++] = ProductBuilder.Scale(rest, c);
-        }
-
-        return Sum.CreateRaw(result);
+        return acc.Finish();
     }
 
     /// <summary>A non-numeric term as coefficient times the rest.</summary>
@@ -95,5 +41,117 @@ internal static class SumBuilder
         }
 
         return (Rational.One, term);
+    }
+
+    private struct Accumulator
+    {
+        private Rational _constant;
+        private List<Expr>? _bodies;
+        private List<Rational>? _coefficients;
+        private Dictionary<Expr, int>? _index;
+
+        public void Add(Expr term)
+        {
+            if (term is Number n)
+            {
+                _constant += n.Value;
+                return;
+            }
+
+            var (c, body) = Split(term);
+            _bodies ??= new List<Expr>(4);
+            _coefficients ??= new List<Rational>(4);
+            int at = Find(body);
+            if (at >= 0)
+            {
+                _coefficients[at] += c;
+                return;
+            }
+
+            _index?.Add(body, _bodies.Count);
+            _bodies.Add(body);
+            _coefficients.Add(c);
+            if (_index is null && _bodies.Count > ScanLimit)
+            {
+                _index = new Dictionary<Expr, int>(_bodies.Count * 2);
+                for (int i = 0; i < _bodies.Count; i++)
+                {
+                    _index.Add(_bodies[i], i);
+                }
+            }
+        }
+
+        private readonly int Find(Expr body)
+        {
+            if (_index is not null)
+            {
+                return _index.TryGetValue(body, out int at) ? at : -1;
+            }
+
+            var bodies = _bodies!;
+            for (int i = 0; i < bodies.Count; i++)
+            {
+                if (ReferenceEquals(bodies[i], body))
+                {
+                    return i;
+                }
+            }
+
+            return -1;
+        }
+
+        public readonly Expr Finish()
+        {
+            int count = 0;
+            if (_bodies is not null)
+            {
+                foreach (var c in _coefficients!)
+                {
+                    if (!c.IsZero)
+                    {
+                        count++;
+                    }
+                }
+            }
+
+            if (count == 0)
+            {
+                return Number.Create(_constant);
+            }
+
+            var pairs = new (Expr Term, Rational Coefficient)[count];
+            int k = 0;
+            for (int i = 0; i < _bodies!.Count; i++)
+            {
+                if (!_coefficients![i].IsZero)
+                {
+                    pairs[k++] = (_bodies[i], _coefficients[i]);
+                }
+            }
+
+            if (count == 1 && _constant.IsZero)
+            {
+                return ProductBuilder.Scale(pairs[0].Term, pairs[0].Coefficient);
+            }
+
+            if (count > 1)
+            {
+                Array.Sort(pairs, static (x, y) => ExprOrder.Compare(x.Term, y.Term));
+            }
+
+            var result = new Expr[count + (_constant.IsZero ? 0 : 1)];
+            k = 0;
+            if (!_constant.IsZero)
+            {
+                result[k++] = Number.Create(_constant);
+            }
+
+            foreach (var (body, c) in pairs)
+            {
+                result[k++] = ProductBuilder.Scale(body, c);
+            }
+
+            return Sum.CreateRaw(result);
+        }
     }
 }

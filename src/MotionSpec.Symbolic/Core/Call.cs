@@ -5,18 +5,19 @@ namespace MotionSpec.Symbolic;
 /// <summary>An elementary function applied to its argument(s): sin(x), atan2(y, x).</summary>
 public sealed class Call : Expr
 {
+    private ReadOnlyCollection<Expr>? _arguments;
+
     private Call(Function function, Expr[] arguments)
         : base(ExprKind.Call, 9000 + (int)function, arguments)
     {
         Function = function;
-        Arguments = new ReadOnlyCollection<Expr>(arguments);
     }
 
     /// <summary>The function.</summary>
     public Function Function { get; }
 
     /// <summary>The arguments (two for atan2: y then x).</summary>
-    public IReadOnlyList<Expr> Arguments { get; }
+    public IReadOnlyList<Expr> Arguments => _arguments ??= new ReadOnlyCollection<Expr>(Children);
 
     internal static Call CreateRaw(Function function, Expr[] arguments) => InternTable.Intern(new Call(function, arguments));
 

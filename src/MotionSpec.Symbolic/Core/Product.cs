@@ -5,16 +5,16 @@ namespace MotionSpec.Symbolic;
 /// <summary>A canonical product of two or more factors; a numeric coefficient, if any, is the first factor.</summary>
 public sealed class Product : Expr
 {
+    private ReadOnlyCollection<Expr>? _factors;
     private Expr? _rest;
 
     private Product(Expr[] factors)
         : base(ExprKind.Product, 7002, factors)
     {
-        Factors = new ReadOnlyCollection<Expr>(factors);
     }
 
     /// <summary>The factors in canonical order.</summary>
-    public IReadOnlyList<Expr> Factors { get; }
+    public IReadOnlyList<Expr> Factors => _factors ??= new ReadOnlyCollection<Expr>(Children);
 
     /// <summary>The numeric coefficient (1 when there is none).</summary>
     public Rational Coefficient => Children[0] is Symbolic.Number n ? n.Value : Rational.One;

@@ -5,14 +5,15 @@ namespace MotionSpec.Symbolic;
 /// <summary>A canonical sum of two or more terms (flattened, sorted, like terms combined).</summary>
 public sealed class Sum : Expr
 {
+    private ReadOnlyCollection<Expr>? _terms;
+
     private Sum(Expr[] terms)
         : base(ExprKind.Sum, 7001, terms)
     {
-        Terms = new ReadOnlyCollection<Expr>(terms);
     }
 
     /// <summary>The terms in canonical order (a constant term, if any, first).</summary>
-    public IReadOnlyList<Expr> Terms { get; }
+    public IReadOnlyList<Expr> Terms => _terms ??= new ReadOnlyCollection<Expr>(Children);
 
     internal static Sum CreateRaw(Expr[] sortedTerms) => InternTable.Intern(new Sum(sortedTerms));
 

@@ -41,6 +41,7 @@ public static class CommonSubexpressions
             uses[root] = uses.TryGetValue(root, out int u) ? u + 1 : 1;
         }
 
+        var roots = new HashSet<Expr>(outputs);
         var hoist = new HashSet<Expr>();
         foreach (var node in order)
         {
@@ -71,15 +72,7 @@ public static class CommonSubexpressions
                 rebuilt = Rebuild.With(node, children);
             }
 
-            bool isOutputRoot = false;
-            foreach (var root in outputs)
-            {
-                if (ReferenceEquals(root, node))
-                {
-                    isOutputRoot = true;
-                    break;
-                }
-            }
+            bool isOutputRoot = roots.Contains(node);
 
             bool worth = !IsAtom(node) && !IsNegatedAtom(node) && (uses[node] > 1 || node is Call || hoist.Contains(node));
             if (worth && !(isOutputRoot && uses[node] == 1))

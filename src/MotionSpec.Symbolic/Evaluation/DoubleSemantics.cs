@@ -6,6 +6,46 @@ namespace MotionSpec.Symbolic;
 /// </summary>
 internal static class DoubleSemantics
 {
+    /// <summary>A power's exponent classified once, for the tape: small integers, square roots, or a general exponent.</summary>
+    public static (int Code, double Exponent) Classify(Rational e)
+    {
+        if (e.TryGetInt32(out int n) && n is >= -4 and <= 4)
+        {
+            return (n, 0.0);
+        }
+
+        if (e == Rational.Half)
+        {
+            return (SquareRoot, 0.0);
+        }
+
+        if (e == new Rational(-1, 2))
+        {
+            return (InverseSquareRoot, 0.0);
+        }
+
+        return (General, e.ToDouble());
+    }
+
+    public const int SquareRoot = 10;
+    public const int InverseSquareRoot = 11;
+    public const int General = 12;
+
+    /// <summary>The same values as Pow(x, e) for the exponent Classify(e) described.</summary>
+    public static double Pow(double x, int code, double exponent) => code switch
+    {
+        2 => x * x,
+        3 => x * x * x,
+        4 => (x * x) * (x * x),
+        -1 => 1.0 / x,
+        -2 => 1.0 / (x * x),
+        -3 => 1.0 / (x * x * x),
+        -4 => 1.0 / ((x * x) * (x * x)),
+        SquareRoot => Math.Sqrt(x),
+        InverseSquareRoot => 1.0 / Math.Sqrt(x),
+        _ => Math.Pow(x, exponent),
+    };
+
     public static double Pow(double x, Rational e)
     {
         if (e.TryGetInt32(out int n))

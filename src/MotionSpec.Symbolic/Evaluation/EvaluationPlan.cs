@@ -103,7 +103,7 @@ public sealed class EvaluationPlan
                 case Power pw:
                     ins.Op = OpCode.Power;
                     ins.A = register[pw.Base];
-                    ins.Exponent = pw.Exponent;
+                    (ins.PowerCode, ins.Value) = DoubleSemantics.Classify(pw.Exponent);
                     break;
                 case Call { Function: Function.Atan2 } c:
                     ins.Op = OpCode.Atan2;
@@ -177,7 +177,7 @@ public sealed class EvaluationPlan
 
                     break;
                 case OpCode.Power:
-                    v = DoubleSemantics.Pow(r[ins.A], ins.Exponent);
+                    v = DoubleSemantics.Pow(r[ins.A], ins.PowerCode, ins.Value);
                     break;
                 case OpCode.Atan2:
                     v = Math.Atan2(r[ins.A], r[ins.B]);
@@ -207,6 +207,6 @@ public sealed class EvaluationPlan
         public int Start;
         public int Count;
         public double Value;
-        public Rational Exponent;
+        public int PowerCode;
     }
 }

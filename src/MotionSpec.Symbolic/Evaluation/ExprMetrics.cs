@@ -58,7 +58,7 @@ public static class ExprMetrics
     {
         if (e.TryGetInt32(out int n) && n is >= -4 and <= 4)
         {
-            int multiplies = n switch { 2 or -2 => 1, 3 or -3 => 2, 4 or -4 => 2, _ => 0 };
+            int multiplies = n switch { 2 or -2 => 1, 3 or -3 => 2, 4 or -4 => 3, _ => 0 };
             return multiplies + (n < 0 ? 1 : 0);
         }
 

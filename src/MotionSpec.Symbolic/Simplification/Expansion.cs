@@ -3,11 +3,51 @@ namespace MotionSpec.Symbolic;
 /// <summary>Distributes products over sums inside the terms of a sum, within a term budget.</summary>
 internal static class Expansion
 {
-    public const int MaxTerms = 512;
+    public const int MaxTerms = 64;
 
     /// <summary>The sum with every product-of-sums term multiplied out; null when nothing expands or the budget is exceeded.</summary>
     public static Expr? Expand(Sum s)
     {
+        // Estimate the expanded size first: building products is the expensive part.
+        long estimate = 0;
+        bool any = false;
+        foreach (var term in s.Children)
+        {
+            long count = 1;
+            if (term is Product p)
+            {
+                foreach (var f in p.Children)
+                {
+                    if (f is Sum inner)
+                    {
+                        count *= inner.Children.Length;
+                        any = true;
+                    }
+                    else if (f is Power { Base: Sum squared, Exponent: var e } && e == 2)
+                    {
+                        count *= (long)squared.Children.Length * squared.Children.Length;
+                        any = true;
+                    }
+
+                    if (count > MaxTerms)
+                    {
+                        return null;
+                    }
+                }
+            }
+
+            estimate += count;
+            if (estimate > MaxTerms)
+            {
+                return null;
+            }
+        }
+
+        if (!any || !ExpansionPreview.CouldShrink(s, MaxTerms))
+        {
+            return null;
+        }
+
         var terms = new List<Expr>();
         bool changed = false;
         foreach (var term in s.Children)

@@ -7,7 +7,7 @@ namespace MotionSpec.Symbolic;
 /// </summary>
 internal static class LocalSize
 {
-    public const int Levels = 6;
+    public const int Levels = 4;
 
     public static int Of(Expr e)
     {

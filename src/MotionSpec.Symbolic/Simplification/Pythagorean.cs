@@ -10,6 +10,11 @@ internal static class Pythagorean
     /// <summary>The sum with the identity applied until no pair is left; null when it never applies.</summary>
     public static Expr? Apply(Sum s)
     {
+        if (!HasSquaredTrig(s))
+        {
+            return null;
+        }
+
         Expr current = s;
         bool any = false;
         for (int round = 0; round < 64 && current is Sum sum; round++)
@@ -25,6 +30,23 @@ internal static class Pythagorean
         }
 
         return any ? current : null;
+    }
+
+    private static bool HasSquaredTrig(Sum s)
+    {
+        foreach (var term in s.Children)
+        {
+            IEnumerable<Expr> factors = term is Product p ? p.Children : [term];
+            foreach (var f in factors)
+            {
+                if (f is Power { Base: Call { Function: Function.Sin or Function.Cos } } pw && pw.Exponent.IsInteger && pw.Exponent >= 2)
+                {
+                    return true;
+                }
+            }
+        }
+
+        return false;
     }
 
     private static Expr? Once(Sum s)

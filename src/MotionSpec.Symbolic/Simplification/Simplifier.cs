@@ -34,13 +34,18 @@ public static class Simplifier
         }
 
         Expr best = s;
-        int bestSize = LocalSize.Of(s);
+        int bestSize = -1;
 
         void Consider(Expr? candidate)
         {
             if (candidate is null || ReferenceEquals(candidate, best))
             {
                 return;
+            }
+
+            if (bestSize < 0)
+            {
+                bestSize = LocalSize.Of(s);
             }
 
             int size = LocalSize.Of(candidate);
@@ -59,7 +64,7 @@ public static class Simplifier
         }
 
         // Greedy factoring: take the best common factor, then try again on what is left outside.
-        for (int round = 0; round < 8 && best is Sum current; round++)
+        for (int round = 0; round < 4 && best is Sum current; round++)
         {
             var before = best;
             foreach (var candidate in CommonFactor.Candidates(current))
@@ -75,4 +80,5 @@ public static class Simplifier
 
         return best;
     }
+
 }
