@@ -7,14 +7,14 @@ using BenchmarkDotNet.Running;
 namespace MotionSpec.Benchmarks.CSharp;
 
 /// <summary>
-/// Two columns on the generated rows: the ratio generated / hand-written with the time of the sine and cosine
-/// calls both make taken out of each, (G - T) / (H - T), and the generated method's operation count.
+/// A column on the generated rows: the ratio generated / hand-written with the time of the sine and cosine
+/// calls both make taken out of each, (G - T) / (H - T).
 /// </summary>
 public sealed class ChainColumnsConfig : ManualConfig
 {
     public ChainColumnsConfig()
     {
-        AddColumn(new SinCosAdjustedRatioColumn(), new OperationCountColumn());
+        AddColumn(new SinCosAdjustedRatioColumn());
     }
 }
 
@@ -52,42 +52,6 @@ public sealed class SinCosAdjustedRatioColumn : IColumn
         var (g, h, t) = (Mean(nameof(ChainEvaluatorBenchmarks.Generated)), Mean(nameof(ChainEvaluatorBenchmarks.HandWritten)),
             Mean(nameof(ChainEvaluatorBenchmarks.SinCosOnly)));
         return g is null || h is null || t is null || h <= t ? "?" : ((g - t) / (h - t))!.Value.ToString("0.000", CultureInfo.InvariantCulture);
-    }
-
-    public bool IsDefault(Summary summary, BenchmarkCase benchmarkCase) => false;
-
-    public bool IsAvailable(Summary summary) => true;
-}
-
-public sealed class OperationCountColumn : IColumn
-{
-    public string Id => nameof(OperationCountColumn);
-
-    public string ColumnName => "Ops (generated)";
-
-    public bool AlwaysShow => true;
-
-    public ColumnCategory Category => ColumnCategory.Custom;
-
-    public int PriorityInCategory => 1;
-
-    public bool IsNumeric => true;
-
-    public UnitType UnitType => UnitType.Dimensionless;
-
-    public string Legend => "arithmetic operators + Math calls in the generated method, counted by the Roslyn walk";
-
-    public string GetValue(Summary summary, BenchmarkCase benchmarkCase) => GetValue(summary, benchmarkCase, SummaryStyle.Default);
-
-    public string GetValue(Summary summary, BenchmarkCase benchmarkCase, SummaryStyle style)
-    {
-        if (benchmarkCase.Descriptor.WorkloadMethod.Name != nameof(ChainEvaluatorBenchmarks.Generated))
-        {
-            return "-";
-        }
-
-        var links = (int)benchmarkCase.Parameters[nameof(ChainEvaluatorBenchmarks.Links)];
-        return new GeneratedChain(links).Operations.ToString(CultureInfo.InvariantCulture);
     }
 
     public bool IsDefault(Summary summary, BenchmarkCase benchmarkCase) => false;
