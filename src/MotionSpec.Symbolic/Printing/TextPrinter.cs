@@ -125,25 +125,26 @@ public static class TextPrinter
                 first = false;
             }
 
-            int denominatorCount = denominator.Count + (magnitude.Denominator.IsOne ? 0 : 1);
-            if (denominatorCount == 0)
+            // The numeric denominator is divided out on its own (x/2/(y + 1), not x/(2*(y + 1))): read back, a
+            // number times a sum would be multiplied out, which is another canonical form.
+            if (!magnitude.Denominator.IsOne)
+            {
+                Text("/");
+                Text(magnitude.Denominator.ToString(CultureInfo.InvariantCulture));
+            }
+
+            if (denominator.Count == 0)
             {
                 return;
             }
 
             Text("/");
-            if (denominatorCount > 1)
+            if (denominator.Count > 1)
             {
                 Text("(");
             }
 
             first = true;
-            if (!magnitude.Denominator.IsOne)
-            {
-                Text(magnitude.Denominator.ToString(CultureInfo.InvariantCulture));
-                first = false;
-            }
-
             foreach (var f in denominator)
             {
                 if (!first)
@@ -151,11 +152,11 @@ public static class TextPrinter
                     Text("*");
                 }
 
-                Child(f, denominatorCount > 1 ? Level.Unary : Level.Power);
+                Child(f, denominator.Count > 1 ? Level.Unary : Level.Power);
                 first = false;
             }
 
-            if (denominatorCount > 1)
+            if (denominator.Count > 1)
             {
                 Text(")");
             }
