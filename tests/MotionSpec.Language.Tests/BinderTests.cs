@@ -130,6 +130,7 @@ public class BinderTests
     [InlineData("frame f\npoint f in f at [0, 0, 0]", C.DuplicateName)]
     [InlineData("param tipInF = 1\nframe f\npoint tip in f at [0, 0, 0]\nreport tip in f", C.DuplicateName)]
     [InlineData("coord q : angle\nparam a = q", C.ParamNotConstant)]
+    [InlineData("let a = t'", C.MarkOnNonCoord)]
     [InlineData("coord q : angle\nlet k = q\nparam a = k", C.ParamNotConstant)]
     [InlineData("frame f\nlet a = f", C.WrongKind)]
     [InlineData("frame f\npoint p in f at [0, 0, 0]\nlet a = p", C.WrongKind)]

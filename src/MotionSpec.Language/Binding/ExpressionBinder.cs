@@ -206,6 +206,12 @@ internal sealed class ExpressionBinder(Scope scope, DiagnosticBag diagnostics)
 
     private BoundExpr BindTime(TimeSyntax time)
     {
+        if (time.Marks > 0)
+        {
+            diagnostics.Error(LanguageDiagnosticCodes.MarkOnNonCoord, time.Span, "'t' is time; marks (' and '') go only on coords");
+            return new BoundErrorExpr(time.Span, false);
+        }
+
         if (_place.IsParamDefinition)
         {
             diagnostics.Error(LanguageDiagnosticCodes.ParamNotConstant, time.Span, "a param is a constant, so it cannot use the time 't' (use let)");

@@ -62,7 +62,10 @@ internal static class TokenParsers
 
     /// <summary><c>t</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Time =
-        Token.EqualTo(MotionToken.Time).Select(t => (ExpressionSyntax)new TimeSyntax(SpanOf(t)));
+        Parse.Sequence(Token.EqualTo(MotionToken.Time), Token.EqualTo(MotionToken.Mark).OptionalOrDefault())
+            .Select(p => (ExpressionSyntax)(p.Item2.HasValue
+                ? new TimeSyntax(TextSpan.Cover(SpanOf(p.Item1), SpanOf(p.Item2)), Math.Min(p.Item2.Span.Length, 2))
+                : new TimeSyntax(SpanOf(p.Item1))));
 
     /// <summary><c>pi</c>.</summary>
     private static readonly TokenListParser<MotionToken, ExpressionSyntax> Pi =
