@@ -64,7 +64,17 @@ public static class TableWriter
                 }
             }
         }
+
+        // The table is the form people act on, so it ends with the caution that the derivations carry too.
+        writer.Write('\n');
+        writer.Write(Caution);
+        writer.Write('\n');
     }
+
+    /// <summary>The closing line of every table.</summary>
+    public const string Caution =
+        "Caution: these values follow from the spec alone. Loads on people, payloads or structures must be checked " +
+        "against the applicable codes and standards and by a qualified engineer.";
 
     /// <summary>"tipInQuay: point tip seen from quay, terms relative to hook, basis quay".</summary>
     private static string Title(Language.Binding.Symbols.ReportSymbol report) =>

@@ -40,4 +40,13 @@ public sealed class TableWriterTests
         // The boom turns at 0.6 rpm = 0.02 pi rad/s: six significant digits, no round-trip tails.
         Assert.Contains(Lines(), l => l.Contains("angularVelocity", StringComparison.Ordinal) && l.Contains("0.0628319", StringComparison.Ordinal));
     }
+
+    [Fact]
+    public void TheTableEndsWithTheSafetyCaution()
+    {
+        // The table is what people read and act on: its last line defers to the codes and to a qualified engineer.
+        var lines = Lines().Where(l => l.Length > 0).ToArray();
+        Assert.Equal(TableWriter.Caution, lines[^1]);
+        Assert.Contains("qualified engineer", TableWriter.Caution, StringComparison.Ordinal);
+    }
 }
