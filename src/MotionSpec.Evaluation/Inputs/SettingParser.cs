@@ -129,7 +129,7 @@ public static class SettingParser
         }
 
         var candidates = spec.Parameters.Where(p => !p.IsDerived).Select(p => p.Name).Concat(spec.Coords.Select(c => c.Name));
-        var suggestion = NameSuggestion.Closest(name, candidates);
+        var suggestion = NameSuggestions.Closest(name, candidates);
         return suggestion is null
             ? $"no param or coord is named '{name}'"
             : $"no param or coord is named '{name}'; did you mean '{suggestion}'?";

@@ -7,8 +7,31 @@ namespace MotionSpec.Language.Binding;
 /// and swaps of two adjacent letters (each 1), at most 2 and less than the name's length; ties go to the name
 /// declared first.
 /// </summary>
-internal static class NameSuggestions
+public static class NameSuggestions
 {
+    /// <summary>The best candidate name, or null when none is close enough (used for command-line names too).</summary>
+    public static string? Closest(string name, IEnumerable<string> candidatesInOrder)
+    {
+        string? best = null;
+        var bestDistance = int.MaxValue;
+        foreach (var candidate in candidatesInOrder)
+        {
+            if (Math.Abs(candidate.Length - name.Length) > 2)
+            {
+                continue;
+            }
+
+            var distance = Distance(name, candidate);
+            if (distance <= 2 && distance < name.Length && distance < bestDistance)
+            {
+                best = candidate;
+                bestDistance = distance;
+            }
+        }
+
+        return best;
+    }
+
     /// <summary>The best candidate, or null when none is close enough.</summary>
     public static Symbol? Closest(string name, IEnumerable<Symbol> candidatesInDeclarationOrder)
     {
