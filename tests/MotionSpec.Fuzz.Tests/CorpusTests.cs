@@ -8,6 +8,7 @@ public class CorpusTests
     {
         ["errors.motion"] = ["MOT3002", "MOT2203", "MOT2204", "MOT1201"],
         ["not-finite.motion"] = ["MOT5001"],
+        ["powers.motion"] = ["MOT5104"],
     };
 
     public static TheoryData<string> Seeds => new(FuzzFiles.Inputs(FuzzFiles.Corpus));

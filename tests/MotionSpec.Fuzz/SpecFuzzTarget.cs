@@ -14,7 +14,7 @@ namespace MotionSpec.Fuzz;
 /// <summary>
 /// The one fuzz target, shared by the AFL entry point and the regression tests: the bytes of a spec go through
 /// the checker and, when they check clean and the model is small, through eval at one state, the C# emitter
-/// and the derivation writers. An exception escaping <see cref="Run"/> is a defect.
+/// (double and float) and the derivation writers. An exception escaping <see cref="Run"/> is a defect.
 /// </summary>
 public static class SpecFuzzTarget
 {
@@ -65,20 +65,28 @@ public static class SpecFuzzTarget
 
         CheckPositions(found.Sorted(), spec.Source);
 
-        var emitted = CSharpEmitter.Emit(spec, new CSharpEmitOptions());
-        if (emitted.Succeeded == emitted.Diagnostics.Any(d => d.IsError))
-        {
-            throw new FuzzInvariantException("the emitter must give either code or an error");
-        }
-
-        CheckPositions(emitted.Diagnostics, spec.Source);
+        var emitted = Emit(spec, useFloat: false);
+        var emittedFloat = Emit(spec, useFloat: true);
 
         _ = DerivationWriter.Write(model, spec.DisplayName, DerivationFormat.Text);
         if (bound.Frames.Count <= MaxDocumentFrames && bound.Reports.Count <= MaxDocumentReports)
         {
             _ = DerivationWriter.Write(model, spec.DisplayName, DerivationFormat.Markdown);
         }
-        return new FuzzOutcome(Codes(spec.Diagnostics.Concat(found.Sorted()).Concat(emitted.Diagnostics)), FuzzStage.BackEnd);
+        return new FuzzOutcome(Codes(spec.Diagnostics.Concat(found.Sorted()).Concat(emitted.Diagnostics).Concat(emittedFloat.Diagnostics)), FuzzStage.BackEnd);
+    }
+
+    // Both number types: the float evaluator has range checks of its own.
+    private static CSharpEmitResult Emit(CheckedSpec spec, bool useFloat)
+    {
+        var emitted = CSharpEmitter.Emit(spec, new CSharpEmitOptions(UseFloat: useFloat));
+        if (emitted.Succeeded == emitted.Diagnostics.Any(d => d.IsError))
+        {
+            throw new FuzzInvariantException("the emitter must give either code or an error");
+        }
+
+        CheckPositions(emitted.Diagnostics, spec.Source);
+        return emitted;
     }
 
     private static List<string> Codes(IEnumerable<Diagnostic> diagnostics) => diagnostics.Select(d => d.Code).ToList();
