@@ -11,6 +11,6 @@ public enum FuzzStage
     /// <summary>Only the checker ran: the spec had errors, or its model was too large for the back end.</summary>
     Check,
 
-    /// <summary>Eval, emit and the text derivation ran as well (and the Markdown one, for a small enough model).</summary>
+    /// <summary>Eval and emit ran as well, and the derivations when the model is small enough for them.</summary>
     BackEnd,
 }

@@ -49,7 +49,7 @@ rm -rf "$findings"
 # or core-dump settings to speak of; the cores are shared, so no pinning and a lower priority.
 AFL_SKIP_BIN_CHECK=1 AFL_SKIP_CPUFREQ=1 AFL_I_DONT_CARE_ABOUT_MISSING_CRASHES=1 AFL_NO_UI=1 AFL_NO_AFFINITY=1 \
 AFL_FAST_CAL=1 \
-  nice -n 10 afl-fuzz -i "$here/corpus" -o "$findings" -x "$here/motion.dict" -t 10000 -m none -V "$seconds" \
+  nice -n 10 afl-fuzz -i "$here/corpus" -o "$findings" -x "$here/motion.dict" -t 20000 -m none -V "$seconds" \
   -- dotnet "$bin/MotionSpec.Fuzz.dll" >"$work/afl.log" 2>&1
 afl_status=$?
 
