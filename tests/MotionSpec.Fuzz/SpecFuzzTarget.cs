@@ -13,8 +13,9 @@ namespace MotionSpec.Fuzz;
 
 /// <summary>
 /// The one fuzz target, shared by the AFL entry point and the regression tests: the bytes of a spec go through
-/// the checker and, when they check clean and the model is small, through eval at one state, the C# emitter
-/// (double and float) and, for the smaller models, the text and Markdown derivations. An exception escaping <see cref="Run"/> is a defect.
+/// the checker and, when they check clean and the model is small, through eval at one state and the C#
+/// emitter (double and float), and for the smaller models the text and Markdown derivations. An exception
+/// escaping <see cref="Run"/> is a defect.
 /// </summary>
 public static class SpecFuzzTarget
 {
@@ -80,6 +81,7 @@ public static class SpecFuzzTarget
         {
             _ = DerivationWriter.Write(model, spec.DisplayName, DerivationFormat.Markdown);
         }
+
         return new FuzzOutcome(Codes(spec.Diagnostics.Concat(found.Sorted()).Concat(emitted.Diagnostics).Concat(emittedFloat.Diagnostics)), FuzzStage.BackEnd);
     }
 
