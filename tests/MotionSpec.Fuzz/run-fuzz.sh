@@ -68,7 +68,8 @@ for pair in crash:crashes hang:hangs; do
     cp "$input" "$here/regressions/$name"
     echo "fuzz: new $kind saved as tests/MotionSpec.Fuzz/regressions/$name"
     if [ "$kind" = crash ]; then
-      timeout 60 dotnet "$bin/MotionSpec.Fuzz.dll" --replay "$here/regressions/$name" | grep FAILED | sed 's/^[^:]*: FAILED /  /'
+      # The build beside the published one is not instrumented: instrumented code needs AFL's shared memory.
+      timeout 60 dotnet "$here/bin/Release/net10.0/MotionSpec.Fuzz.dll" --replay "$here/regressions/$name" | grep FAILED | sed 's/^[^:]*: FAILED /  /'
     fi
   done
 done
