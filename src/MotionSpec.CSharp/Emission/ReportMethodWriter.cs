@@ -16,11 +16,29 @@ internal static class ReportMethodWriter
     {
         var number = type == NumericType.Float ? "float" : "double";
         var outputs = new List<Expr>();
+        var split = AccelerationFromTerms.Split(motion, isTaken);
+        var termLocals = new Dictionary<int, Sym>();
         foreach (var quantity in motion.Quantities)
         {
+            var axis = 0;
             foreach (var component in motion[quantity].Components)
             {
-                outputs.Add(derivedParams.Count == 0 ? component : Substitution.Apply(component, derivedParams));
+                if (split is { } s && quantity == Quantity.Acceleration)
+                {
+                    outputs.Add(s.Acceleration[axis]);
+                }
+                else
+                {
+                    var term = TermIndex(quantity);
+                    if (split is { } t && term >= 0)
+                    {
+                        termLocals[outputs.Count] = t.TermLocals[(3 * term) + axis];
+                    }
+
+                    outputs.Add(derivedParams.Count == 0 ? component : Substitution.Apply(component, derivedParams));
+                }
+
+                axis++;
             }
         }
 
@@ -41,22 +59,41 @@ internal static class ReportMethodWriter
             : "/// <returns>Angular velocity (rad/s) and acceleration (rad/s^2); origin position (m), velocity (m/s) and acceleration (m/s^2).</returns>");
         var resultType = isPoint ? "PointMotion" : "FrameMotion";
         w.Open($"public static {resultType} {method}({number} t, in State s, in Parameters p)");
-        foreach (var temporary in program.Temporaries)
+        foreach (var temporary in TemporarySchedule.ByLink(program.Temporaries))
         {
             w.Line($"{number} {temporary.Name.Name} = {Print(temporary.Value)};");
         }
 
+        foreach (var (index, local) in termLocals.OrderBy(p => p.Key))
+        {
+            w.Line($"{number} {local.Name} = {Print(program.Outputs[index])};");
+        }
+
+        string Output(int index) => termLocals.TryGetValue(index, out var local) ? local.Name : Print(program.Outputs[index]);
         w.Line($"return new {resultType}(");
         for (var v = 0; v < program.Outputs.Count / 3; v++)
         {
-            var x = Print(program.Outputs[3 * v]);
-            var y = Print(program.Outputs[(3 * v) + 1]);
-            var z = Print(program.Outputs[(3 * v) + 2]);
+            var x = Output(3 * v);
+            var y = Output((3 * v) + 1);
+            var z = Output((3 * v) + 2);
             var end = (3 * v) + 3 == program.Outputs.Count ? ");" : ",";
             w.Line($"    new Vec3({x}, {y}, {z}){end}");
         }
 
         w.Close();
         return new EmittedMethod(report.Name, method, isPoint, program.Temporaries.Count);
+    }
+
+    private static int TermIndex(Quantity quantity)
+    {
+        for (var i = 0; i < QuantityInfo.Terms.Count; i++)
+        {
+            if (QuantityInfo.Terms[i] == quantity)
+            {
+                return i;
+            }
+        }
+
+        return -1;
     }
 }
