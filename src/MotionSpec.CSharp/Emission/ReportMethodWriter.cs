@@ -12,7 +12,7 @@ namespace MotionSpec.CSharp.Emission;
 internal static class ReportMethodWriter
 {
     public static EmittedMethod Write(CodeWriter w, ReportMotion motion, string method, NumericType type,
-        IReadOnlyDictionary<Sym, Expr> derivedParams, Func<Sym, string> inputName, Func<string, bool> isTaken)
+        IReadOnlyDictionary<Sym, Expr> derivedParams, Func<Sym, string> inputName, Func<string, bool> isTaken, Func<Sym, int> coordRank)
     {
         var number = type == NumericType.Float ? "float" : "double";
         var outputs = new List<Expr>();
@@ -59,7 +59,7 @@ internal static class ReportMethodWriter
             : "/// <returns>Angular velocity (rad/s) and acceleration (rad/s^2); origin position (m), velocity (m/s) and acceleration (m/s^2).</returns>");
         var resultType = isPoint ? "PointMotion" : "FrameMotion";
         w.Open($"public static {resultType} {method}({number} t, in State s, in Parameters p)");
-        foreach (var temporary in TemporarySchedule.ByLink(program.Temporaries))
+        foreach (var temporary in TemporarySchedule.ByLink(program.Temporaries, coordRank))
         {
             w.Line($"{number} {temporary.Name.Name} = {Print(temporary.Value)};");
         }
