@@ -58,6 +58,11 @@ internal static class ReportMethodWriter
             ? "/// <returns>Position (m), velocity (m/s), acceleration and its five terms (m/s^2).</returns>"
             : "/// <returns>Angular velocity (rad/s) and acceleration (rad/s^2); origin position (m), velocity (m/s) and acceleration (m/s^2).</returns>");
         var resultType = isPoint ? "PointMotion" : "FrameMotion";
+        // Long straight-line methods would otherwise run unoptimised until the runtime's tiering recompiles
+        // them, which for a big chain takes many calls: a controller's first cycles would be the slow ones.
+        // 512 is MethodImplOptions.AggressiveOptimization, written as a number because netstandard2.0 lacks
+        // the name; runtimes without it ignore it.
+        w.Line("[global::System.Runtime.CompilerServices.MethodImpl((global::System.Runtime.CompilerServices.MethodImplOptions)512)] // compiled optimised on first call");
         w.Open($"public static {resultType} {method}({number} t, in State s, in Parameters p)");
         foreach (var temporary in TemporarySchedule.ByLink(program.Temporaries, coordRank))
         {
