@@ -69,9 +69,9 @@ internal static class ReportMethodWriter
             w.Line($"{number} {temporary.Name.Name} = {Print(temporary.Value)};");
         }
 
-        foreach (var (index, local) in termLocals.OrderBy(p => p.Key))
+        foreach (var term in termLocals.OrderBy(p => p.Key))
         {
-            w.Line($"{number} {local.Name} = {Print(program.Outputs[index])};");
+            w.Line($"{number} {term.Value.Name} = {Print(program.Outputs[term.Key])};");
         }
 
         string Output(int index) => termLocals.TryGetValue(index, out var local) ? local.Name : Print(program.Outputs[index]);
