@@ -25,6 +25,9 @@ internal static class Tex
     public static string Column(Expr x, Expr y, Expr z) =>
         $"\\begin{{bmatrix}} {Cell(x)} \\\\ {Cell(y)} \\\\ {Cell(z)} \\end{{bmatrix}}";
 
+    /// <summary>Largest expression, in nodes written out as a tree, that a cell shows in full.</summary>
+    public const int CellNodeLimit = 2000;
+
     /// <summary>Printed width (in LaTeX source characters) beyond which a sum is broken over several lines.</summary>
     public const int LineWidth = 80;
 
@@ -34,6 +37,15 @@ internal static class Tex
     /// </summary>
     public static string Cell(Expr e)
     {
+        // A long chain's composed forms are linear in size as shared graphs but grow geometrically written out;
+        // past this size a cell says so instead of filling the document (the text format names their parts).
+        var written = ExprMetrics.TreeNodeCount(e);
+        if (written > CellNodeLimit)
+        {
+            return "\\text{(" + written.ToString("N0", System.Globalization.CultureInfo.InvariantCulture)
+                + " terms and factors written out; see derive --format text)}";
+        }
+
         var whole = LatexPrinter.Print(e);
         if (whole.Length <= LineWidth || e is not Sum sum)
         {

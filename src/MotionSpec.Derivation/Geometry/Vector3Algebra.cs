@@ -21,7 +21,16 @@ internal static class Vector3Algebra
 
     public static bool IsZero(Vector3Expr a) => a.X.IsZero && a.Y.IsZero && a.Z.IsZero;
 
-    public static Vector3Expr Simplify(Vector3Expr a) => new(Simplifier.Simplify(a.X), Simplifier.Simplify(a.Y), Simplifier.Simplify(a.Z));
+    /// <summary>
+    /// Above this many distinct nodes a form is shown as composed, as the kinematics leaves it: hand-style
+    /// simplification of a long chain's forms costs far more than it gives and can multiply them out.
+    /// </summary>
+    public const int TidyNodeLimit = 60;
+
+    public static Vector3Expr Simplify(Vector3Expr a) => new(Tidy(a.X), Tidy(a.Y), Tidy(a.Z));
+
+    /// <summary>The simplified form of a small expression; a large one unchanged (see <see cref="TidyNodeLimit"/>).</summary>
+    public static Expr Tidy(Expr e) => ExprMetrics.NodeCount(e) <= TidyNodeLimit ? Simplifier.Simplify(e) : e;
 
     /// <summary>M v: parent components of a vector given in the child's basis (columns of M are the child's axes).</summary>
     public static Vector3Expr Apply(Matrix3Expr m, Vector3Expr v) =>

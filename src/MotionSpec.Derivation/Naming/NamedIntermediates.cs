@@ -26,7 +26,7 @@ internal sealed class NamedIntermediates
 
     public static NamedIntermediates Find(IReadOnlyList<Expr> outputs, SpecNames names)
     {
-        var simplified = outputs.Select(Simplifier.Simplify).ToArray();
+        var simplified = outputs.Select(Geometry.Vector3Algebra.Tidy).ToArray();
         var program = CommonSubexpressions.Eliminate(simplified, "k", names.IsTaken);
 
         var uses = new Dictionary<Symbol, int>();
@@ -86,42 +86,43 @@ internal sealed class NamedIntermediates
         return new NamedIntermediates(temporaries, renamed);
     }
 
+    // Counts every edge into a temporary: a temporary used by two different nodes of one closed form is used
+    // twice. (Counting it once per form, as a visited set of nodes would, put back temporaries used many
+    // times within one form, and a long chain's forms then grew exponentially when written out.)
     private static void CountUses(Expr e, Dictionary<Symbol, int> uses, HashSet<Expr> seen)
     {
-        if (!seen.Add(e))
+        var stack = new Stack<Expr>();
+        stack.Push(e);
+        while (stack.Count > 0)
         {
-            return;
-        }
-
-        switch (e)
-        {
-            case Symbol s when s.Kind == SymbolKind.Intermediate:
-                uses[s] = uses.GetValueOrDefault(s) + 1;
-                break;
-            case Sum sum:
-                foreach (var term in sum.Terms)
+            var node = stack.Pop();
+            if (node is Symbol s)
+            {
+                if (s.Kind == SymbolKind.Intermediate)
                 {
-                    CountUses(term, uses, seen);
+                    uses[s] = uses.GetValueOrDefault(s) + 1;
                 }
 
-                break;
-            case Product product:
-                foreach (var factor in product.Factors)
-                {
-                    CountUses(factor, uses, seen);
-                }
+                continue;
+            }
 
-                break;
-            case Power power:
-                CountUses(power.Base, uses, seen);
-                break;
-            case Call call:
-                foreach (var argument in call.Arguments)
-                {
-                    CountUses(argument, uses, seen);
-                }
+            if (!seen.Add(node))
+            {
+                continue;
+            }
 
-                break;
+            IEnumerable<Expr> children = node switch
+            {
+                Sum sum => sum.Terms,
+                Product product => product.Factors,
+                Power power => [power.Base],
+                Call call => call.Arguments,
+                _ => [],
+            };
+            foreach (var child in children)
+            {
+                stack.Push(child);
+            }
         }
     }
 }
