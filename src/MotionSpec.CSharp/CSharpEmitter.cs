@@ -90,11 +90,18 @@ public static class CSharpEmitter
         EvaluatorTypesWriter.Write(w, number, independent, values, bound.Coords, names);
 
         var derived = DerivedParams(model);
+        var coordRanks = new Dictionary<string, int>(StringComparer.Ordinal);
+        for (var i = 0; i < bound.Coords.Count; i++)
+        {
+            coordRanks[bound.Coords[i].Name] = i + 1;
+        }
+
+        int CoordRank(Sym coord) => coordRanks.TryGetValue(coord.Name, out var rank) ? rank : 0;
         var methods = new List<EmittedMethod>();
         for (var i = 0; i < model.Reports.Count; i++)
         {
             w.Line();
-            methods.Add(ReportMethodWriter.Write(w, model.Reports[i], names.ReportMethods[i], type, derived, inputName, IsTaken));
+            methods.Add(ReportMethodWriter.Write(w, model.Reports[i], names.ReportMethods[i], type, derived, inputName, IsTaken, CoordRank));
         }
 
         w.Close();

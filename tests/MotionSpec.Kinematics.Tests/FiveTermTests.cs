@@ -5,8 +5,9 @@ namespace MotionSpec.Kinematics.Tests;
 
 /// <summary>
 /// The five terms add up to the acceleration, and the acceleration is the second time derivative of the position
-/// (both taken in the observer's basis). Two independent routes: the transport theorem part by part, and plain
-/// differentiation of the position's components.
+/// (both taken in the observer's basis). The kinematics builds a point's acceleration as the sum of its terms,
+/// each derived by the transport theorem part by part, so the first test guards that build and its
+/// simplification; the independent route is the second, plain differentiation of the position's components.
 /// </summary>
 public class FiveTermTests
 {
@@ -79,6 +80,28 @@ public class FiveTermTests
         report lens in mount basis head
         report head in mount basis head
         report mount in ground
+        """,
+        // A six-link boom, long enough that vectors cross it through one composed rotation matrix.
+        """
+        param a = 0.4 m
+        coord q1 : angle
+        coord q2 : angle
+        coord q3 : angle
+        coord q4 : angle
+        coord q5 : angle
+        coord q6 : angle
+        coord s : length
+        frame yard
+        frame b1 in yard { rotate about z by q1 }
+        frame b2 in b1 { rotate about y by q2 origin at [a, 0, 0] }
+        frame b3 in b2 { rotate about [1, 0, 1] by q3 origin at [a + s, 0, 0] }
+        frame b4 in b3 { rotate about z by q4 origin at [a, 0, 0] }
+        frame b5 in b4 { rotate about y by q5 origin at [a, 0, 0] }
+        frame b6 in b5 { rotate about z by q6 origin at [a, 0, 0.1 m] }
+        point tool in b6 at [a + s, 0, 0]
+        report tool in yard
+        report tool in yard via b1
+        report b6 in yard
         """,
     };
 

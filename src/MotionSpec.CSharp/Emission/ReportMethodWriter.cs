@@ -12,15 +12,33 @@ namespace MotionSpec.CSharp.Emission;
 internal static class ReportMethodWriter
 {
     public static EmittedMethod Write(CodeWriter w, ReportMotion motion, string method, NumericType type,
-        IReadOnlyDictionary<Sym, Expr> derivedParams, Func<Sym, string> inputName, Func<string, bool> isTaken)
+        IReadOnlyDictionary<Sym, Expr> derivedParams, Func<Sym, string> inputName, Func<string, bool> isTaken, Func<Sym, int> coordRank)
     {
         var number = type == NumericType.Float ? "float" : "double";
         var outputs = new List<Expr>();
+        var split = AccelerationFromTerms.Split(motion, isTaken);
+        var termLocals = new Dictionary<int, Sym>();
         foreach (var quantity in motion.Quantities)
         {
+            var axis = 0;
             foreach (var component in motion[quantity].Components)
             {
-                outputs.Add(derivedParams.Count == 0 ? component : Substitution.Apply(component, derivedParams));
+                if (split is { } s && quantity == Quantity.Acceleration)
+                {
+                    outputs.Add(s.Acceleration[axis]);
+                }
+                else
+                {
+                    var term = TermIndex(quantity);
+                    if (split is { } t && term >= 0)
+                    {
+                        termLocals[outputs.Count] = t.TermLocals[(3 * term) + axis];
+                    }
+
+                    outputs.Add(derivedParams.Count == 0 ? component : Substitution.Apply(component, derivedParams));
+                }
+
+                axis++;
             }
         }
 
@@ -40,23 +58,47 @@ internal static class ReportMethodWriter
             ? "/// <returns>Position (m), velocity (m/s), acceleration and its five terms (m/s^2).</returns>"
             : "/// <returns>Angular velocity (rad/s) and acceleration (rad/s^2); origin position (m), velocity (m/s) and acceleration (m/s^2).</returns>");
         var resultType = isPoint ? "PointMotion" : "FrameMotion";
+        // Long straight-line methods would otherwise run unoptimised until the runtime's tiering recompiles
+        // them, which for a big chain takes many calls: a controller's first cycles would be the slow ones.
+        // 512 is MethodImplOptions.AggressiveOptimization, written as a number because netstandard2.0 lacks
+        // the name; runtimes without it ignore it.
+        w.Line("[global::System.Runtime.CompilerServices.MethodImpl((global::System.Runtime.CompilerServices.MethodImplOptions)512)] // compiled optimised on first call");
         w.Open($"public static {resultType} {method}({number} t, in State s, in Parameters p)");
-        foreach (var temporary in program.Temporaries)
+        foreach (var temporary in TemporarySchedule.ByLink(program.Temporaries, coordRank))
         {
             w.Line($"{number} {temporary.Name.Name} = {Print(temporary.Value)};");
         }
 
+        foreach (var term in termLocals.OrderBy(p => p.Key))
+        {
+            w.Line($"{number} {term.Value.Name} = {Print(program.Outputs[term.Key])};");
+        }
+
+        string Output(int index) => termLocals.TryGetValue(index, out var local) ? local.Name : Print(program.Outputs[index]);
         w.Line($"return new {resultType}(");
         for (var v = 0; v < program.Outputs.Count / 3; v++)
         {
-            var x = Print(program.Outputs[3 * v]);
-            var y = Print(program.Outputs[(3 * v) + 1]);
-            var z = Print(program.Outputs[(3 * v) + 2]);
+            var x = Output(3 * v);
+            var y = Output((3 * v) + 1);
+            var z = Output((3 * v) + 2);
             var end = (3 * v) + 3 == program.Outputs.Count ? ");" : ",";
             w.Line($"    new Vec3({x}, {y}, {z}){end}");
         }
 
         w.Close();
         return new EmittedMethod(report.Name, method, isPoint, program.Temporaries.Count);
+    }
+
+    private static int TermIndex(Quantity quantity)
+    {
+        for (var i = 0; i < QuantityInfo.Terms.Count; i++)
+        {
+            if (QuantityInfo.Terms[i] == quantity)
+            {
+                return i;
+            }
+        }
+
+        return -1;
     }
 }

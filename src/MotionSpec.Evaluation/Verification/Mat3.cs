@@ -71,6 +71,24 @@ internal readonly struct Mat3
     /// <summary>The axial vector of the skew part, (M - M^T)/2, so that Skew(v) gives back v.</summary>
     public Vec3 AxialOfSkewPart() => new((_m21 - _m12) / 2, (_m02 - _m20) / 2, (_m10 - _m01) / 2);
 
+    /// <summary>
+    /// The rotation vector (unit axis times angle, the angle in [0, pi]) of a rotation matrix. The angle comes from
+    /// atan2 of the skew part's size and the trace, which stays accurate for small turns where acos would not;
+    /// a half turn, where the axis cannot be read off the skew part, gives NaN.
+    /// </summary>
+    public Vec3 RotationVector()
+    {
+        var axial = AxialOfSkewPart();
+        var sine = axial.Norm;
+        var cosine = (_m00 + _m11 + _m22 - 1) / 2;
+        if (sine == 0)
+        {
+            return cosine > 0 ? Vec3.Zero : new Vec3(double.NaN, double.NaN, double.NaN);
+        }
+
+        return axial * (Math.Atan2(sine, cosine) / sine);
+    }
+
     /// <summary>The nine entries, row-major.</summary>
     public void CopyTo(Span<double> destination)
     {

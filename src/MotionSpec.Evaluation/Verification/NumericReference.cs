@@ -10,17 +10,22 @@ namespace MotionSpec.Evaluation.Verification;
 /// </summary>
 internal sealed class NumericReference
 {
-    private const int PointProbe = 18;   // P in A (3), P from B's origin in B (3), B's origin in A (3), B in A (9)
-    private const int FrameProbe = 12;   // F's origin in A (3), F in A (9)
+    // P in A (3), P from B's origin in B (3), B's origin in A (3), B in A (9), B's turn since the sample time (3)
+    private const int PointProbe = 21;
+
+    // F's origin in A (3), F in A (9), F's turn since the sample time (3)
+    private const int FrameProbe = 15;
 
     private readonly BoundSpec _spec;
     private readonly int[] _offsets;
     private readonly int _size;
+    private readonly Mat3[] _atSample;
 
     public NumericReference(BoundSpec spec)
     {
         _spec = spec;
         _offsets = new int[spec.Reports.Count];
+        _atSample = new Mat3[spec.Reports.Count];
         foreach (var report in spec.Reports)
         {
             _offsets[report.Index] = _size;
@@ -42,6 +47,12 @@ internal sealed class NumericReference
     public Vec3[][] Evaluate(MotionState state)
     {
         var scene = new NumericScene(_spec, state);
+        scene.Compute(state.Time);
+        foreach (var report in _spec.Reports)
+        {
+            _atSample[report.Index] = Relative(scene, report);
+        }
+
         var (value, firsts, seconds) = StepLadder.Estimate((time, buffer) => Probe(scene, time, buffer), state.Time, _size);
         scene.Compute(state.Time);
 
@@ -84,13 +95,15 @@ internal sealed class NumericReference
             var observerToBasis = basis * observer;
             var at = o + (report.Kind == ReportKind.Point ? 9 : 3);
             var q = Mat3.From(value.AsSpan(at, 9));
-            var qRate = Mat3.From(first.AsSpan(at, 9));
-            var qAcceleration = Mat3.From(second.AsSpan(at, 9));
 
-            // With Q the moving frame's axes in the observer's basis, dQ/dt Q^T = [w]x, and the derivative of
-            // that, d2Q/dt2 Q^T + dQ/dt dQ/dt^T, has the same skew part as d2Q/dt2 Q^T.
-            var omega = observerToBasis * (qRate * q.Transpose()).AxialOfSkewPart();
-            var alpha = observerToBasis * (qAcceleration * q.Transpose()).AxialOfSkewPart();
+            // With Q the moving frame's axes in the observer's basis and theta(t) the rotation vector of
+            // Q(t0)^T Q(t), the turn since the sample time, omega = Q theta' and alpha = Q theta'' at t0 (the
+            // rotation vector's Jacobian is I at theta = 0, and its rate contributes theta' x theta' = 0).
+            // Differentiating theta rather than Q's entries keeps omega^2, which fills d2Q/dt2, out of alpha:
+            // a steady turn is a straight line in theta, so a small alpha beside a large omega^2 stays accurate.
+            var turn = at + 9;
+            var omega = observerToBasis * (q * At(first, turn));
+            var alpha = observerToBasis * (q * At(second, turn));
 
             if (report.Kind == ReportKind.Point)
             {
@@ -146,14 +159,28 @@ internal sealed class NumericReference
                 Put(span, 0, observerT * (p - observerOrigin));
                 Put(span, 3, scene.Orientations[moving.Index].Transpose() * (p - movingOrigin));
                 Put(span, 6, observerT * (movingOrigin - observerOrigin));
-                (observerT * scene.Orientations[moving.Index]).CopyTo(span[9..]);
+                PutOrientation(span[9..], scene, report);
             }
             else
             {
                 Put(span, 0, observerT * (movingOrigin - observerOrigin));
-                (observerT * scene.Orientations[moving.Index]).CopyTo(span[3..]);
+                PutOrientation(span[3..], scene, report);
             }
         }
+    }
+
+    /// <summary>The moving frame's axes in the observer's basis (9), then its turn since the sample time (3).</summary>
+    private void PutOrientation(Span<double> span, NumericScene scene, ReportSymbol report)
+    {
+        var q = Relative(scene, report);
+        q.CopyTo(span);
+        Put(span, 9, (_atSample[report.Index].Transpose() * q).RotationVector());
+    }
+
+    private static Mat3 Relative(NumericScene scene, ReportSymbol report)
+    {
+        var moving = report.Kind == ReportKind.Point ? report.Via! : report.SubjectFrame;
+        return scene.Orientations[report.Observer.Index].Transpose() * scene.Orientations[moving.Index];
     }
 
     private static void Put(Span<double> span, int at, Vec3 v)

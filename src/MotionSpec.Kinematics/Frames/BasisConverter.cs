@@ -8,7 +8,16 @@ namespace MotionSpec.Kinematics.Frames;
 /// </summary>
 internal sealed class BasisConverter(FrameOrientation orientation, DerivationIssues issues)
 {
+    /// <summary>
+    /// From this many links on, a vector crosses the path through one composed rotation matrix instead of link by
+    /// link. The matrix costs about three single-link rotations per link but is shared by every vector crossing
+    /// the same path (a point report sends seven), and it is built from the top down, so a long chain is computed
+    /// in one forward sweep. Shorter paths keep the link-by-link forms that read best in derivations.
+    /// </summary>
+    internal const int ComposedPathLength = 5;
+
     private readonly Dictionary<(Vector3Expr Value, int From, int To), Vector3Expr> _cache = [];
+    private readonly Dictionary<(int Frame, int Ancestor), Matrix3Expr?> _down = [];
 
     public Vector3Expr Convert(Vector3Expr value, FrameSymbol from, FrameSymbol to)
     {
@@ -21,6 +30,13 @@ internal sealed class BasisConverter(FrameOrientation orientation, DerivationIss
         if (_cache.TryGetValue(key, out var known))
         {
             return known;
+        }
+
+        if (FrameTree.Distance(from, to) >= ComposedPathLength && Composed(from, to) is { } matrix)
+        {
+            var crossed = matrix.Apply(value);
+            _cache[key] = crossed;
+            return crossed;
         }
 
         var current = value;
@@ -41,6 +57,94 @@ internal sealed class BasisConverter(FrameOrientation orientation, DerivationIss
     /// parts they meet, like Horner's rule, so a chain of n links costs n rotations instead of n^2.
     /// </summary>
     public Vector3Expr ToBasis(FrameVector vector, FrameSymbol target)
+    {
+        // Parts strung along one path away from the target (a chain) are gathered at its far end first, so the
+        // sweep runs forward, and cross to the target together.
+        if (FarEnd(vector, target) is { } far)
+        {
+            return Convert(Gather(vector, far), far, target);
+        }
+
+        return Gather(vector, target);
+    }
+
+    /// <summary>The matrix taking components in <paramref name="from"/> to components in <paramref name="to"/>; null across a spin link.</summary>
+    private Matrix3Expr? Composed(FrameSymbol from, FrameSymbol to)
+    {
+        var ancestor = FrameTree.CommonAncestor(from, to);
+        var up = Down(from, ancestor);
+        var down = Down(to, ancestor);
+        return up is null || down is null ? null : down.Transpose().Multiply(up);
+    }
+
+    /// <summary>Components in the ancestor from components in the frame: the product of the link rotations, top first.</summary>
+    private Matrix3Expr? Down(FrameSymbol frame, FrameSymbol ancestor)
+    {
+        if (ReferenceEquals(frame, ancestor))
+        {
+            return Matrix3Expr.Identity;
+        }
+
+        var key = (frame.Index, ancestor.Index);
+        if (_down.TryGetValue(key, out var known))
+        {
+            return known;
+        }
+
+        // Iterative from the top, caching every prefix, so deep chains never recurse.
+        Matrix3Expr? product = Matrix3Expr.Identity;
+        foreach (var link in FrameTree.PathBelow(ancestor, frame))
+        {
+            var linkKey = (link.Index, ancestor.Index);
+            if (_down.TryGetValue(linkKey, out var cached))
+            {
+                product = cached;
+                continue;
+            }
+
+            var rotation = product is null ? null : orientation.Rotation(link);
+            product = rotation is null ? null : product!.Multiply(rotation);
+            _down[linkKey] = product;
+        }
+
+        return product;
+    }
+
+    /// <summary>
+    /// The part basis farthest from the target when every part lies on the path from the target to it and that
+    /// path is long enough to cross by a composed matrix; otherwise null.
+    /// </summary>
+    private static FrameSymbol? FarEnd(FrameVector vector, FrameSymbol target)
+    {
+        FrameSymbol? far = null;
+        var farthest = 0;
+        foreach (var (basis, _) in vector.Parts)
+        {
+            var distance = FrameTree.Distance(basis, target);
+            if (distance > farthest)
+            {
+                far = basis;
+                farthest = distance;
+            }
+        }
+
+        if (far is null || farthest < ComposedPathLength)
+        {
+            return null;
+        }
+
+        foreach (var (basis, _) in vector.Parts)
+        {
+            if (FrameTree.Distance(target, basis) + FrameTree.Distance(basis, far) != farthest)
+            {
+                return null;
+            }
+        }
+
+        return far;
+    }
+
+    private Vector3Expr Gather(FrameVector vector, FrameSymbol target)
     {
         var pending = new Dictionary<int, (FrameSymbol Basis, Vector3Expr Value)>();
         foreach (var (basis, value) in vector.Parts)

@@ -28,6 +28,13 @@ internal sealed class ReportBuilder(
     {
         var values = report.Kind == ReportKind.Point ? PointReport(report) : FrameReport(report);
         var inBasis = values.ToDictionary(p => p.Key, p => p.Value.Map(Tidy));
+        if (report.Kind == ReportKind.Point)
+        {
+            // The sum of the terms as they will be read, so that the identity holds exactly in every consumer.
+            var sum = QuantityInfo.Terms.Aggregate(Vector3Expr.Zero, (total, term) => total + inBasis[term]);
+            inBasis[Quantity.Acceleration] = sum.Map(Tidy);
+        }
+
         return new ReportMotion(report, report.Kind == ReportKind.Point ? QuantityInfo.PointQuantities : QuantityInfo.FrameQuantities, inBasis);
     }
 
@@ -88,16 +95,24 @@ internal sealed class ReportBuilder(
         FrameVector CrossWith(Vector3Expr w, FrameVector x) =>
             x.MapParts((b, part) => Vector3Expr.Cross(converter.Convert(w, via, b), part));
 
+        var relative = converter.ToBasis(derivative.Second(fromVia, via), basis);
+        var centripetal = converter.ToBasis(CrossWith(omega, CrossWith(omega, fromVia)), basis);
+        var angularTerm = converter.ToBasis(CrossWith(alpha, fromVia), basis);
+        var coriolis = converter.ToBasis(CrossWith(omega, relativeVelocity).Scaled(two), basis);
+        var origin = converter.ToBasis(derivative.Second(OriginOffset(via, observer), observer), basis);
+
+        // The acceleration is not derived here: Build makes it the five-term sum itself, since the terms are
+        // needed anyway and deriving the whole path a second time is what made long chains costly. Its
+        // independent checks are verify's numeric path and the kinematics tests' plain differentiation.
         return new Dictionary<Quantity, Vector3Expr>
         {
             [Quantity.Position] = converter.ToBasis(fromObserver, basis),
             [Quantity.Velocity] = converter.ToBasis(derivative.First(fromObserver, observer), basis),
-            [Quantity.Acceleration] = converter.ToBasis(derivative.Second(fromObserver, observer), basis),
-            [Quantity.Relative] = converter.ToBasis(derivative.Second(fromVia, via), basis),
-            [Quantity.Centripetal] = converter.ToBasis(CrossWith(omega, CrossWith(omega, fromVia)), basis),
-            [Quantity.Angular] = converter.ToBasis(CrossWith(alpha, fromVia), basis),
-            [Quantity.Coriolis] = converter.ToBasis(CrossWith(omega, relativeVelocity).Scaled(two), basis),
-            [Quantity.Origin] = converter.ToBasis(derivative.Second(OriginOffset(via, observer), observer), basis),
+            [Quantity.Relative] = relative,
+            [Quantity.Centripetal] = centripetal,
+            [Quantity.Angular] = angularTerm,
+            [Quantity.Coriolis] = coriolis,
+            [Quantity.Origin] = origin,
         };
     }
 

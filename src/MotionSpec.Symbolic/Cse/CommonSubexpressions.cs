@@ -52,6 +52,7 @@ public static class CommonSubexpressions
         }
 
         var temporaries = new List<Temporary>();
+        var sharedSums = new SharedSums();
         var replaced = new Dictionary<Expr, Expr>();
         int counter = 0;
         foreach (var node in order)
@@ -72,6 +73,9 @@ public static class CommonSubexpressions
                 rebuilt = Rebuild.With(node, children);
             }
 
+            var flat = rebuilt;
+            rebuilt = sharedSums.Rewrite(rebuilt);
+
             bool isOutputRoot = roots.Contains(node);
 
             bool worth = !IsAtom(node) && !IsNegatedAtom(node) && (uses[node] > 1 || node is Call || hoist.Contains(node));
@@ -88,6 +92,7 @@ public static class CommonSubexpressions
                 usedNames.Add(name);
                 var symbol = Symbol.Intermediate(name);
                 temporaries.Add(new Temporary(symbol, rebuilt));
+                sharedSums.Register(symbol, flat);
                 replaced[node] = symbol;
             }
             else

@@ -88,6 +88,7 @@ public sealed class GeneratedChain
 
         text.Append("        _state.s = s; _state.s_dot = sd; _state.s_ddot = sdd;\n    }\n\n");
         text.Append("    /// <summary>Evaluates and copies the result.</summary>\n    /// <param name=\"o\">24 components.</param>\n");
+        text.Append("    [global::System.Runtime.CompilerServices.MethodImpl(global::System.Runtime.CompilerServices.MethodImplOptions.AggressiveOptimization)]\n");
         text.Append($"    public static void Run(double[] o)\n    {{\n        var m = Arm.{method}(0.0, in _state, in _parameters);\n");
         var vectors = new[] { "Position", "Velocity", "Acceleration", "Relative", "Centripetal", "Angular", "Coriolis", "Origin" };
         for (var v = 0; v < vectors.Length; v++)
