@@ -9,6 +9,13 @@ namespace MotionSpec.Cli;
 internal static class AtomicFileWriter
 {
     /// <summary>
+    /// Opens the temporary file; tests replace it to make a run fail while it writes (a full disk, a folder
+    /// without write permission). Flow-local, so a failure injected by one test never reaches a command that
+    /// another test runs at the same time.
+    /// </summary>
+    internal static readonly AsyncLocal<Func<string, Stream>?> OpenTemporary = new();
+
+    /// <summary>
     /// Writes what <paramref name="write"/> produces to <paramref name="path"/>. Returns null on success, or a
     /// message naming the path as given when the file could not be written (nothing is left behind then).
     /// </summary>
@@ -26,10 +33,17 @@ internal static class AtomicFileWriter
 
             var folder = Path.GetDirectoryName(full) ?? ".";
             temporary = Path.Combine(folder, $".{Path.GetFileName(full)}.{Guid.NewGuid():N}.tmp");
-            using (var stream = new FileStream(temporary, FileMode.CreateNew, FileAccess.Write, FileShare.None))
+            using (var stream = (OpenTemporary.Value ?? Create)(temporary))
             {
                 write(stream);
-                stream.Flush(flushToDisk: true);
+                if (stream is FileStream file)
+                {
+                    file.Flush(flushToDisk: true);
+                }
+                else
+                {
+                    stream.Flush();
+                }
             }
 
             File.Move(temporary, full, overwrite: true);
@@ -56,6 +70,8 @@ internal static class AtomicFileWriter
             using var writer = new StreamWriter(stream, new System.Text.UTF8Encoding(false), leaveOpen: true);
             writer.Write(text);
         });
+
+    private static FileStream Create(string temporary) => new(temporary, FileMode.CreateNew, FileAccess.Write, FileShare.None);
 
     private static string Describe(Exception e) => e switch
     {

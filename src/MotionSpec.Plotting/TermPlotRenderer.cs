@@ -1,3 +1,4 @@
+using System.Globalization;
 using System.Text;
 using ScottPlot;
 using SkiaSharp;
@@ -17,9 +18,21 @@ public static class TermPlotRenderer
     public static byte[] Render(TermPlotData data, PlotImageFormat format)
     {
         ArgumentNullException.ThrowIfNull(data);
-        var multiplot = Compose(data);
-        var height = PanelHeight * multiplot.Subplots.Count;
-        return format == PlotImageFormat.Svg ? RenderSvg(multiplot, height) : RenderPng(multiplot, height);
+
+        // ScottPlot writes tick labels in the thread's culture (0,5 under de-DE, with another minus sign under
+        // ar-SA); the same data must give the same image on every machine, so it draws in the invariant one.
+        var culture = CultureInfo.CurrentCulture;
+        CultureInfo.CurrentCulture = CultureInfo.InvariantCulture;
+        try
+        {
+            var multiplot = Compose(data);
+            var height = PanelHeight * multiplot.Subplots.Count;
+            return format == PlotImageFormat.Svg ? RenderSvg(multiplot, height) : RenderPng(multiplot, height);
+        }
+        finally
+        {
+            CultureInfo.CurrentCulture = culture;
+        }
     }
 
     private static Multiplot Compose(TermPlotData data)

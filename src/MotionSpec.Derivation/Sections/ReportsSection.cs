@@ -51,13 +51,23 @@ internal static class ReportsSection
         ]));
 
         var rows = new List<string>();
-        if (checks.RelativePosition is { } r)
+        var tooLong = (checks.RelativePosition is { } whole && TooLongToPrint(whole))
+            || (checks.RelativeVelocity is { } wholeVelocity && TooLongToPrint(wholeVelocity));
+        if (tooLong)
+        {
+            // Built here without named intermediates, these grow with every link of a long chain (doubling per
+            // link as printed); a formula of millions of terms helps no reviewer and would take hours to write.
+            blocks.Add(new Paragraph(new Words(
+                $"The point's position relative to the moving frame's origin and its velocity as seen in {b.Name} are too long to print here (more than {MaxPrintedNodes.ToString(System.Globalization.CultureInfo.InvariantCulture)} symbols in a component); the checks below use them as computed.")));
+        }
+
+        if (!tooLong && checks.RelativePosition is { } r)
         {
             rows.Add($"{Tex.In("\\mathbf{r}", c)} &= {Tex.In($"\\mathbf{{p}} - \\mathbf{{r}}_{{O_{{{Tex.Name(b)}}}/O_{{{Tex.Name(a)}}}}}", c)}");
             rows.Add($"&= {Tex.Column(r)}");
         }
 
-        if (checks.RelativeVelocity is { } vRel)
+        if (!tooLong && checks.RelativeVelocity is { } vRel)
         {
             rows.Add($"{Tex.In("\\mathbf{v}_{\\mathrm{rel}}", c)} &= {Tex.In(Tex.DerivativeIn(b, "\\mathbf{r}"), c)}");
             rows.Add($"&= {Tex.Column(vRel)}");
@@ -101,6 +111,11 @@ internal static class ReportsSection
             [new Words("Each term against its defining formula, evaluated from the position, relative velocity and rotation shown above: " + checks.TermsAgainstDefinitions.Describe() + ".")],
         ]));
     }
+
+    /// <summary>Components larger than this (as printed, without sharing) are described instead of printed.</summary>
+    internal const int MaxPrintedNodes = 20_000;
+
+    private static bool TooLongToPrint(Vector3Expr v) => v.Components.Any(e => MotionSpec.Symbolic.ExprMetrics.TreeNodeCount(e) > MaxPrintedNodes);
 
     private static void AddFrame(List<Block> blocks, DerivationContext context, int index, ReportSymbol report, ReportChecks checks)
     {

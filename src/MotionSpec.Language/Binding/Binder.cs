@@ -144,7 +144,16 @@ internal sealed class Binder
         {
             _diagnostics.Error(LanguageDiagnosticCodes.TreeTooDeep, syntax.Name.Span,
                 $"frame '{syntax.Name.Text}' would be {(parent.Depth + 1).ToString(CultureInfo.InvariantCulture)} levels below its root; the tree depth limit is {Limits.FrameTreeDepth.ToString(CultureInfo.InvariantCulture)}");
-            parent = null;
+
+            // Like a frame with an unknown parent: taken as a new root it would start a second tree, and every
+            // report and frame further down would then get a derived error of its own (one per 500 links of a
+            // long chain, and "not in the same tree" for its reports). The one error above is the whole story.
+            if (free)
+            {
+                _scope.AddBroken(syntax.Name.Text);
+            }
+
+            free = false;
         }
 
         var frame = new FrameSymbol(syntax.Name.Text, syntax.Name.Span, syntax.Span, _frames.Count, parent);

@@ -41,7 +41,7 @@ internal static class UnitReader
 
                 var digits = unit.Substring(position + 1, end - position - 1);
                 position = end;
-                if (digits.TrimStart('-').TrimStart('0').Length > 3
+                if (digits.TrimStart('-').TrimStart('0').Length > 4
                     || !int.TryParse(digits, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out exponent)
                     || Math.Abs(exponent) > Limits.Exponent)
                 {
