@@ -101,6 +101,27 @@ public class PropertyTests
         }, iter: Iterations);
     }
 
+    /// <summary>
+    /// Grouping and where a number is applied must not matter: (a*b)*c = a*(b*c), (k*a)*b = k*(a*b),
+    /// (a + b) + c = a + (b + c), and an integer power of a product is the product of the powers.
+    /// </summary>
+    [Fact]
+    public void GroupingAndNumericFactorsDoNotChangeTheForm()
+    {
+        var k = Gen.Int[-4, 4].Where(n => n != 0).Select(Gen.Int[1, 3], (n, d) => Expr.Number(new Rational(n, d)));
+        Gen.Select(RandomExpressions.Expressions(3, 3), k).Sample((e, c) =>
+        {
+            var (a, b, d) = (e[0], e[1], e[2]);
+            Assert.Same((a * b) * d, a * (b * d));
+            Assert.Same((c * a) * b, c * (a * b));
+            Assert.Same(a * (c * b), (a * b) * c);
+            Assert.Same(-(a * b), (-a) * b);
+            Assert.Same((a + b) + d, a + (b + d));
+            Assert.Same((c * a) + (c * b), c * (a + b));
+            Assert.Same(Expr.Pow(c * a * b, 2), c * c * Expr.Pow(a, 2) * Expr.Pow(b, 2));
+        }, iter: Iterations);
+    }
+
     [Fact]
     public void CanonicalisationIsIdempotent()
     {

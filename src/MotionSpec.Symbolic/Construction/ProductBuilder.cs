@@ -2,7 +2,9 @@ namespace MotionSpec.Symbolic;
 
 /// <summary>
 /// Builds canonical products: flattened, numbers folded into one leading coefficient, like bases combined
-/// by adding exponents, sorted by base; a number times a lone sum is distributed so that terms cancel.
+/// by adding exponents, sorted by base. A sum factor gives up its content to the coefficient (SumContent),
+/// so the same value never has two shapes; only a number times a lone sum is multiplied out, so that
+/// 2*(a + b) and 2*a + 2*b are one node and terms cancel across sums.
 /// </summary>
 internal static class ProductBuilder
 {
@@ -55,6 +57,14 @@ internal static class ProductBuilder
                 case Power pw:
                     AddFactor(pw.Base, pw.Exponent);
                     return true;
+                case Sum sum:
+                    {
+                        var (content, primitive) = SumContent.Of(sum);
+                        coefficient *= content;
+                        AddFactor(primitive, Rational.One);
+                        return true;
+                    }
+
                 default:
                     AddFactor(f, Rational.One);
                     return true;
@@ -112,7 +122,8 @@ internal static class ProductBuilder
                 continue;
             }
 
-            bool merged = exponents[i] != Rational.One && !(bases[i] is Number) && IsPlainCombination(bases[i]);
+            bool merged = exponents[i] != Rational.One && !(bases[i] is Number) && IsPlainCombination(bases[i])
+                && !(bases[i] is Sum sb && exponents[i].IsInteger && !SumContent.Of(sb).Content.IsOne);
             var f = merged ? Power.CreateRaw(bases[i], exponents[i]) : PowerRules.Pow(bases[i], exponents[i]);
             switch (f)
             {
@@ -131,7 +142,8 @@ internal static class ProductBuilder
                     extra.Add(f);
                     break;
                 default:
-                    if (ReferenceEquals(f, bases[i]))
+                    // A sum reached through merged fractional powers may still hold its content: rebuild.
+                    if (ReferenceEquals(f, bases[i]) && !(f is Sum fs && !SumContent.Of(fs).Content.IsOne))
                     {
                         settled.Add((bases[i], Rational.One, f));
                     }
@@ -249,7 +261,8 @@ internal static class ProductBuilder
         }
     }
 
-    private static Sum Distribute(Sum sum, Rational c)
+    /// <summary>Every term of the sum scaled by c (non-zero).</summary>
+    internal static Sum Distribute(Sum sum, Rational c)
     {
         var terms = new Expr[sum.Children.Length];
         for (int i = 0; i < terms.Length; i++)
