@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace MotionSpec.Symbolic;
 
 /// <summary>
@@ -7,6 +9,13 @@ namespace MotionSpec.Symbolic;
 /// </summary>
 public static class Simplifier
 {
+    private static readonly object MemoGate = new();
+
+    // What each node became, kept as long as the node lives. A node's result depends on the node alone, so
+    // outputs that share subexpressions (the components of one report, the reports of one spec) pay for
+    // each shared node once, whichever output reaches it first; the results are the same either way.
+    private static ConditionalWeakTable<Expr, Expr> _memo = new();
+
     /// <summary>The simplified expression (e itself when nothing helps).</summary>
     public static Expr Simplify(Expr e)
     {
@@ -15,8 +24,7 @@ public static class Simplifier
             throw new ArgumentNullException(nameof(e));
         }
 
-        var map = Rebuild.BottomUp([e], leaf => leaf, SimplifyNode);
-        var result = map[e];
+        var result = Bottom(e);
         if (ReferenceEquals(result, e))
         {
             return e;
@@ -24,6 +32,77 @@ public static class Simplifier
 
         // Local decisions cannot see sharing elsewhere in the DAG; the whole result must not be larger.
         return ExprMetrics.NodeCount(result) <= ExprMetrics.NodeCount(e) ? result : e;
+    }
+
+    /// <summary>Forgets every remembered result, so that a benchmark can measure the work itself.</summary>
+    internal static void ForgetRemembered() => _memo = new ConditionalWeakTable<Expr, Expr>();
+
+    /// <summary>
+    /// Every node rebuilt over its simplified children, then simplified itself, children first; the walk does
+    /// not enter a node whose result is remembered.
+    /// </summary>
+    private static Expr Bottom(Expr root)
+    {
+        var memo = _memo;
+        if (memo.TryGetValue(root, out var known))
+        {
+            return known;
+        }
+
+        var done = new Dictionary<Expr, Expr>();
+        var stack = new Stack<(Expr Node, int Next)>();
+        stack.Push((root, 0));
+        while (stack.Count > 0)
+        {
+            var (node, next) = stack.Pop();
+            var children = node.Children;
+            if (next < children.Length)
+            {
+                stack.Push((node, next + 1));
+                var child = children[next];
+                if (!done.ContainsKey(child))
+                {
+                    if (memo.TryGetValue(child, out var remembered))
+                    {
+                        done[child] = remembered;
+                    }
+                    else
+                    {
+                        stack.Push((child, 0));
+                    }
+                }
+
+                continue;
+            }
+
+            Expr result = node;
+            if (children.Length > 0)
+            {
+                var mapped = new Expr[children.Length];
+                for (int i = 0; i < mapped.Length; i++)
+                {
+                    mapped[i] = done[children[i]];
+                }
+
+                result = SimplifyNode(Rebuild.With(node, mapped));
+            }
+
+            done[node] = result;
+            Remember(memo, node, result);
+        }
+
+        return done[root];
+    }
+
+    private static void Remember(ConditionalWeakTable<Expr, Expr> memo, Expr node, Expr result)
+    {
+        lock (MemoGate)
+        {
+            if (!memo.TryGetValue(node, out _))
+            {
+                memo.Add(node, result);
+            }
+        }
     }
 
     private static Expr SimplifyNode(Expr node)
@@ -80,5 +159,4 @@ public static class Simplifier
 
         return best;
     }
-
 }
