@@ -17,6 +17,8 @@ internal static class ProductBuilder
         Dictionary<Expr, int>? index = null;
         var bases = new List<Expr>(4);
         var exponents = new List<Rational>(4);
+        // The factor node a base arrived in while its exponent is unchanged, so settling can reuse it.
+        var arrived = new List<Expr?>(4);
 
         foreach (var factor in factors)
         {
@@ -55,23 +57,23 @@ internal static class ProductBuilder
                     coefficient *= n.Value;
                     return true;
                 case Power pw:
-                    AddFactor(pw.Base, pw.Exponent);
+                    AddFactor(pw.Base, pw.Exponent, pw);
                     return true;
                 case Sum sum:
                     {
                         var (content, primitive) = SumContent.Of(sum);
                         coefficient *= content;
-                        AddFactor(primitive, Rational.One);
+                        AddFactor(primitive, Rational.One, primitive);
                         return true;
                     }
 
                 default:
-                    AddFactor(f, Rational.One);
+                    AddFactor(f, Rational.One, f);
                     return true;
             }
         }
 
-        void AddFactor(Expr b, Rational e)
+        void AddFactor(Expr b, Rational e, Expr node)
         {
             int at = -1;
             if (index is not null)
@@ -96,12 +98,14 @@ internal static class ProductBuilder
             if (at >= 0)
             {
                 exponents[at] += e;
+                arrived[at] = null;
                 return;
             }
 
             index?.Add(b, bases.Count);
             bases.Add(b);
             exponents.Add(e);
+            arrived.Add(node);
             if (index is null && bases.Count > ScanLimit)
             {
                 index = new Dictionary<Expr, int>(bases.Count * 2);
@@ -124,7 +128,9 @@ internal static class ProductBuilder
 
             bool merged = exponents[i] != Rational.One && !(bases[i] is Number) && IsPlainCombination(bases[i])
                 && !(bases[i] is Sum sb && exponents[i].IsInteger && !SumContent.Of(sb).Content.IsOne);
-            var f = merged ? Power.CreateRaw(bases[i], exponents[i]) : PowerRules.Pow(bases[i], exponents[i]);
+            var f = merged
+                ? arrived[i] as Power ?? Power.CreateRaw(bases[i], exponents[i])
+                : PowerRules.Pow(bases[i], exponents[i]);
             switch (f)
             {
                 case Number n:

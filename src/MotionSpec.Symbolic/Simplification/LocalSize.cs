@@ -9,7 +9,10 @@ internal static class LocalSize
 {
     public const int Levels = 4;
 
-    public static int Of(Expr e)
+    public static int Of(Expr e) => Of(e, int.MaxValue);
+
+    /// <summary>The same count, but stops at <paramref name="limit"/>: a candidate that reaches it cannot win.</summary>
+    public static int Of(Expr e, int limit)
     {
         var seen = new HashSet<Expr> { e };
         var level = new List<Expr> { e };
@@ -23,6 +26,11 @@ internal static class LocalSize
                 {
                     if (seen.Add(child))
                     {
+                        if (seen.Count >= limit)
+                        {
+                            return seen.Count;
+                        }
+
                         next.Add(child);
                     }
                 }

@@ -127,7 +127,7 @@ public static class Simplifier
                 bestSize = LocalSize.Of(s);
             }
 
-            int size = LocalSize.Of(candidate);
+            int size = LocalSize.Of(candidate, bestSize);
             if (size < bestSize)
             {
                 best = candidate;
