@@ -78,6 +78,39 @@ public class PropertyTests
         }, iter: Iterations);
     }
 
+    /// <summary>
+    /// The simplifier remembers what shared nodes became; the result must not depend on what it remembers
+    /// or on the order outputs are simplified in.
+    /// </summary>
+    [Fact]
+    public void SimplificationDoesNotDependOnWhatWasSimplifiedBefore()
+    {
+        Gen.Select(RandomExpressions.Expressions(2, 5), Gen.Int).Sample((outputs, seed) =>
+        {
+            var shared = outputs.Select(o => o * outputs[0]).ToArray();
+            Simplifier.ForgetRemembered();
+            var alone = shared.Select(o =>
+            {
+                Simplifier.ForgetRemembered();
+                return Simplifier.Simplify(o);
+            }).ToArray();
+            var order = Enumerable.Range(0, shared.Length).ToArray();
+            new Random(seed).Shuffle(order);
+            Simplifier.ForgetRemembered();
+            var together = new Expr[shared.Length];
+            foreach (int i in order)
+            {
+                together[i] = Simplifier.Simplify(shared[i]);
+            }
+
+            for (int i = 0; i < shared.Length; i++)
+            {
+                Assert.Same(alone[i], together[i]);
+                Assert.Same(alone[i], Simplifier.Simplify(shared[i]));
+            }
+        }, iter: 100);
+    }
+
     [Fact]
     public void SimplifyingTwiceChangesNothing()
     {
