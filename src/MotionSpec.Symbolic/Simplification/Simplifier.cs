@@ -1,5 +1,3 @@
-using System.Runtime.CompilerServices;
-
 namespace MotionSpec.Symbolic;
 
 /// <summary>
@@ -9,12 +7,12 @@ namespace MotionSpec.Symbolic;
 /// </summary>
 public static class Simplifier
 {
-    private static readonly object MemoGate = new();
-
-    // What each node became, kept as long as the node lives. A node's result depends on the node alone, so
-    // outputs that share subexpressions (the components of one report, the reports of one spec) pay for
-    // each shared node once, whichever output reaches it first; the results are the same either way.
-    private static ConditionalWeakTable<Expr, Expr> _memo = new();
+    // What each node became is kept on the node (Expr.SimplifiedAs). A node's result depends on the node
+    // alone, so outputs that share subexpressions (the components of one report, the reports of one spec)
+    // pay for each shared node once, whichever output reaches it first, and the results are the same either
+    // way; for the same reason a result seen by another thread is always a right one. Forgetting moves the
+    // epoch on, so older entries stop counting.
+    private static int _epoch;
 
     /// <summary>The simplified expression (e itself when nothing helps).</summary>
     public static Expr Simplify(Expr e)
@@ -35,7 +33,7 @@ public static class Simplifier
     }
 
     /// <summary>Forgets every remembered result, so that a benchmark can measure the work itself.</summary>
-    internal static void ForgetRemembered() => _memo = new ConditionalWeakTable<Expr, Expr>();
+    internal static void ForgetRemembered() => Interlocked.Increment(ref _epoch);
 
     /// <summary>
     /// Every node rebuilt over its simplified children, then simplified itself, children first; the walk does
@@ -43,8 +41,8 @@ public static class Simplifier
     /// </summary>
     private static Expr Bottom(Expr root)
     {
-        var memo = _memo;
-        if (memo.TryGetValue(root, out var known))
+        int epoch = Volatile.Read(ref _epoch);
+        if (Remembered(root, epoch) is { } known)
         {
             return known;
         }
@@ -62,7 +60,7 @@ public static class Simplifier
                 var child = children[next];
                 if (!done.ContainsKey(child))
                 {
-                    if (memo.TryGetValue(child, out var remembered))
+                    if (Remembered(child, epoch) is { } remembered)
                     {
                         done[child] = remembered;
                     }
@@ -88,22 +86,15 @@ public static class Simplifier
             }
 
             done[node] = result;
-            Remember(memo, node, result);
+            node.SimplifiedAs = result;
+            node.SimplifiedEpoch = epoch;
         }
 
         return done[root];
     }
 
-    private static void Remember(ConditionalWeakTable<Expr, Expr> memo, Expr node, Expr result)
-    {
-        lock (MemoGate)
-        {
-            if (!memo.TryGetValue(node, out _))
-            {
-                memo.Add(node, result);
-            }
-        }
-    }
+    private static Expr? Remembered(Expr node, int epoch) =>
+        node.SimplifiedEpoch == epoch ? node.SimplifiedAs : null;
 
     private static Expr SimplifyNode(Expr node)
     {
