@@ -78,6 +78,39 @@ public class PropertyTests
         }, iter: Iterations);
     }
 
+    /// <summary>
+    /// The simplifier remembers what shared nodes became; the result must not depend on what it remembers
+    /// or on the order outputs are simplified in.
+    /// </summary>
+    [Fact]
+    public void SimplificationDoesNotDependOnWhatWasSimplifiedBefore()
+    {
+        Gen.Select(RandomExpressions.Expressions(2, 5), Gen.Int).Sample((outputs, seed) =>
+        {
+            var shared = outputs.Select(o => o * outputs[0]).ToArray();
+            Simplifier.ForgetRemembered();
+            var alone = shared.Select(o =>
+            {
+                Simplifier.ForgetRemembered();
+                return Simplifier.Simplify(o);
+            }).ToArray();
+            var order = Enumerable.Range(0, shared.Length).ToArray();
+            new Random(seed).Shuffle(order);
+            Simplifier.ForgetRemembered();
+            var together = new Expr[shared.Length];
+            foreach (int i in order)
+            {
+                together[i] = Simplifier.Simplify(shared[i]);
+            }
+
+            for (int i = 0; i < shared.Length; i++)
+            {
+                Assert.Same(alone[i], together[i]);
+                Assert.Same(alone[i], Simplifier.Simplify(shared[i]));
+            }
+        }, iter: 100);
+    }
+
     [Fact]
     public void SimplifyingTwiceChangesNothing()
     {
@@ -98,6 +131,27 @@ public class PropertyTests
             Assert.Same(Expr.Sum(terms), Expr.Sum(shuffled));
             Assert.Same(Expr.Product(terms), Expr.Product(shuffled));
             Assert.Same(terms.Aggregate((a, b) => a + b), shuffled.Aggregate((a, b) => b + a));
+        }, iter: Iterations);
+    }
+
+    /// <summary>
+    /// Grouping and where a number is applied must not matter: (a*b)*c = a*(b*c), (k*a)*b = k*(a*b),
+    /// (a + b) + c = a + (b + c), and an integer power of a product is the product of the powers.
+    /// </summary>
+    [Fact]
+    public void GroupingAndNumericFactorsDoNotChangeTheForm()
+    {
+        var k = Gen.Int[-4, 4].Where(n => n != 0).Select(Gen.Int[1, 3], (n, d) => Expr.Number(new Rational(n, d)));
+        Gen.Select(RandomExpressions.Expressions(3, 3), k).Sample((e, c) =>
+        {
+            var (a, b, d) = (e[0], e[1], e[2]);
+            Assert.Same((a * b) * d, a * (b * d));
+            Assert.Same((c * a) * b, c * (a * b));
+            Assert.Same(a * (c * b), (a * b) * c);
+            Assert.Same(-(a * b), (-a) * b);
+            Assert.Same((a + b) + d, a + (b + d));
+            Assert.Same((c * a) + (c * b), c * (a + b));
+            Assert.Same(Expr.Pow(c * a * b, 2), c * c * Expr.Pow(a, 2) * Expr.Pow(b, 2));
         }, iter: Iterations);
     }
 

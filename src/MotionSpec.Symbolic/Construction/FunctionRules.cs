@@ -83,12 +83,12 @@ internal static class FunctionRules
         return Call.CreateRaw(Function.Atan2, [y, x]);
     }
 
-    /// <summary>The canonical sign test: a negative number, a negative coefficient, or a sum whose first term is negative.</summary>
+    /// <summary>The canonical sign test: a negative number, a negative coefficient, or a sum whose leading non-constant term is negative.</summary>
     public static bool IsNegative(Expr x) => x switch
     {
         Number n => n.Value.Sign < 0,
         Product p => p.Coefficient.Sign < 0,
-        Sum s => IsNegative(s.Children[0]),
+        Sum s => SumContent.LeadsNegative(s),
         _ => false,
     };
 

@@ -4,8 +4,9 @@ namespace MotionSpec.Symbolic;
 
 /// <summary>
 /// Canonical powers: x^0 = 1, x^1 = x, exact numeric powers and roots, integer powers distributed over
-/// products, and (x^a)^b = x^(a*b) only where that identity holds for every real x where the left side
-/// is defined (b an integer, or a not an integer). So sqrt(x)^2 = x but sqrt(x^2) stays as it is.
+/// products and taken through the content of a sum ((2*a + 2*b)^2 = 4*(a + b)^2), and (x^a)^b = x^(a*b)
+/// only where that identity holds for every real x where the left side is defined (b an integer, or a not
+/// an integer). So sqrt(x)^2 = x but sqrt(x^2) stays as it is.
 /// </summary>
 internal static class PowerRules
 {
@@ -35,6 +36,15 @@ internal static class PowerRules
                 return NumericPower(n, e);
             case Power p when e.IsInteger || !p.Exponent.IsInteger:
                 return Pow(p.Base, p.Exponent * e);
+            case Sum s when e.IsInteger:
+                {
+                    // (k*P)^n = k^n * P^n with P the primitive part, so the number sits outside the power.
+                    var (content, primitive) = SumContent.Of(s);
+                    return content.IsOne
+                        ? Power.CreateRaw(s, e)
+                        : ProductBuilder.Build([NumericPower(Number.Create(content), e), Power.CreateRaw(primitive, e)]);
+                }
+
             case Product p when e.IsInteger:
                 {
                     var factors = new Expr[p.Children.Length];

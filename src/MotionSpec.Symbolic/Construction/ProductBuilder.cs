@@ -2,7 +2,9 @@ namespace MotionSpec.Symbolic;
 
 /// <summary>
 /// Builds canonical products: flattened, numbers folded into one leading coefficient, like bases combined
-/// by adding exponents, sorted by base; a number times a lone sum is distributed so that terms cancel.
+/// by adding exponents, sorted by base. A sum factor gives up its content to the coefficient (SumContent),
+/// so the same value never has two shapes; only a number times a lone sum is multiplied out, so that
+/// 2*(a + b) and 2*a + 2*b are one node and terms cancel across sums.
 /// </summary>
 internal static class ProductBuilder
 {
@@ -15,6 +17,8 @@ internal static class ProductBuilder
         Dictionary<Expr, int>? index = null;
         var bases = new List<Expr>(4);
         var exponents = new List<Rational>(4);
+        // The factor node a base arrived in while its exponent is unchanged, so settling can reuse it.
+        var arrived = new List<Expr?>(4);
 
         foreach (var factor in factors)
         {
@@ -53,15 +57,23 @@ internal static class ProductBuilder
                     coefficient *= n.Value;
                     return true;
                 case Power pw:
-                    AddFactor(pw.Base, pw.Exponent);
+                    AddFactor(pw.Base, pw.Exponent, pw);
                     return true;
+                case Sum sum:
+                    {
+                        var (content, primitive) = SumContent.Of(sum);
+                        coefficient *= content;
+                        AddFactor(primitive, Rational.One, primitive);
+                        return true;
+                    }
+
                 default:
-                    AddFactor(f, Rational.One);
+                    AddFactor(f, Rational.One, f);
                     return true;
             }
         }
 
-        void AddFactor(Expr b, Rational e)
+        void AddFactor(Expr b, Rational e, Expr node)
         {
             int at = -1;
             if (index is not null)
@@ -86,12 +98,14 @@ internal static class ProductBuilder
             if (at >= 0)
             {
                 exponents[at] += e;
+                arrived[at] = null;
                 return;
             }
 
             index?.Add(b, bases.Count);
             bases.Add(b);
             exponents.Add(e);
+            arrived.Add(node);
             if (index is null && bases.Count > ScanLimit)
             {
                 index = new Dictionary<Expr, int>(bases.Count * 2);
@@ -112,8 +126,11 @@ internal static class ProductBuilder
                 continue;
             }
 
-            bool merged = exponents[i] != Rational.One && !(bases[i] is Number) && IsPlainCombination(bases[i]);
-            var f = merged ? Power.CreateRaw(bases[i], exponents[i]) : PowerRules.Pow(bases[i], exponents[i]);
+            bool merged = exponents[i] != Rational.One && !(bases[i] is Number) && IsPlainCombination(bases[i])
+                && !(bases[i] is Sum sb && exponents[i].IsInteger && !SumContent.Of(sb).Content.IsOne);
+            var f = merged
+                ? arrived[i] as Power ?? Power.CreateRaw(bases[i], exponents[i])
+                : PowerRules.Pow(bases[i], exponents[i]);
             switch (f)
             {
                 case Number n:
@@ -131,7 +148,8 @@ internal static class ProductBuilder
                     extra.Add(f);
                     break;
                 default:
-                    if (ReferenceEquals(f, bases[i]))
+                    // A sum reached through merged fractional powers may still hold its content: rebuild.
+                    if (ReferenceEquals(f, bases[i]) && !(f is Sum fs && !SumContent.Of(fs).Content.IsOne))
                     {
                         settled.Add((bases[i], Rational.One, f));
                     }
@@ -249,7 +267,8 @@ internal static class ProductBuilder
         }
     }
 
-    private static Sum Distribute(Sum sum, Rational c)
+    /// <summary>Every term of the sum scaled by c (non-zero).</summary>
+    internal static Sum Distribute(Sum sum, Rational c)
     {
         var terms = new Expr[sum.Children.Length];
         for (int i = 0; i < terms.Length; i++)

@@ -45,6 +45,14 @@ public abstract class Expr : IEquatable<Expr>, IComparable<Expr>
 
     internal int Depth { get; }
 
+    /// <summary>
+    /// What the simplifier made of this node, valid while <see cref="SimplifiedEpoch"/> matches its epoch. Held
+    /// on the node rather than in a side table so that remembering costs the garbage collector nothing extra.
+    /// </summary>
+    internal Expr? SimplifiedAs { get; set; }
+
+    internal int SimplifiedEpoch { get; set; }
+
     /// <summary>0.</summary>
     public static Expr Zero => Nodes.Zero;
 

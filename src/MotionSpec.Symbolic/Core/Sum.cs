@@ -15,6 +15,9 @@ public sealed class Sum : Expr
     /// <summary>The terms in canonical order (a constant term, if any, first).</summary>
     public IReadOnlyList<Expr> Terms => _terms ??= new ReadOnlyCollection<Expr>(Children);
 
+    /// <summary>Content and primitive part, computed once (SumContent).</summary>
+    internal SumContent.Split? CachedContent { get; set; }
+
     internal static Sum CreateRaw(Expr[] sortedTerms) => InternTable.Intern(new Sum(sortedTerms));
 
     internal override bool ShallowEquals(Expr other) => other is Sum && SameChildren(other);

@@ -125,8 +125,8 @@ public static class TextPrinter
                 first = false;
             }
 
-            // The numeric denominator is divided out on its own (x/2/(y + 1), not x/(2*(y + 1))): read back, a
-            // number times a sum would be multiplied out, which is another canonical form.
+            // The numeric denominator is divided out on its own (x/2/(y + 1), not x/(2*(y + 1))), as the node
+            // holds it: one coefficient in front, every sum factor free of numbers it could share.
             if (!magnitude.Denominator.IsOne)
             {
                 Text("/");

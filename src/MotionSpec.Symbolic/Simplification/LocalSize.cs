@@ -9,9 +9,13 @@ internal static class LocalSize
 {
     public const int Levels = 4;
 
-    public static int Of(Expr e)
+    public static int Of(Expr e) => Of(e, int.MaxValue);
+
+    /// <summary>The same count, but stops at <paramref name="limit"/>: a candidate that reaches it cannot win.</summary>
+    public static int Of(Expr e, int limit)
     {
         var seen = new HashSet<Expr> { e };
+        int numbers = 0;
         var level = new List<Expr> { e };
         var next = new List<Expr>();
         for (int depth = 0; depth < Levels && level.Count > 0; depth++)
@@ -23,6 +27,19 @@ internal static class LocalSize
                 {
                     if (seen.Add(child))
                     {
+                        if (child is Number)
+                        {
+                            // A coefficient is part of the product that holds it, not a node a reader sees:
+                            // (10*a - 7*b)/10 is no larger than a - 7*b/10.
+                            numbers++;
+                            continue;
+                        }
+
+                        if (seen.Count - numbers >= limit)
+                        {
+                            return seen.Count - numbers;
+                        }
+
                         next.Add(child);
                     }
                 }
@@ -31,6 +48,6 @@ internal static class LocalSize
             (level, next) = (next, level);
         }
 
-        return seen.Count;
+        return seen.Count - numbers;
     }
 }
