@@ -146,23 +146,24 @@ internal sealed class BasisConverter(FrameOrientation orientation, DerivationIss
 
     private Vector3Expr Gather(FrameVector vector, FrameSymbol target)
     {
-        var pending = new Dictionary<int, (FrameSymbol Basis, Vector3Expr Value)>();
+        // Each part's distance to the target is found once and falls by one per step, so a deep chain costs
+        // a scan of the pending parts per step rather than a walk of the tree per part per step.
+        var pending = new Dictionary<int, (FrameSymbol Basis, Vector3Expr Value, int Distance)>();
         foreach (var (basis, value) in vector.Parts)
         {
-            pending[basis.Index] = (basis, value);
+            pending[basis.Index] = (basis, value, FrameTree.Distance(basis, target));
         }
 
         while (true)
         {
-            (FrameSymbol Basis, Vector3Expr Value)? farthest = null;
-            var farthestDistance = 0;
-            foreach (var part in pending.Values.OrderBy(p => p.Basis.Index))
+            (FrameSymbol Basis, Vector3Expr Value, int Distance)? farthest = null;
+            foreach (var part in pending.Values)
             {
-                var distance = FrameTree.Distance(part.Basis, target);
-                if (distance > farthestDistance)
+                // The farthest part moves first; among equals the earliest frame, for a deterministic order.
+                if (part.Distance > 0 && (farthest is not { } best || part.Distance > best.Distance
+                    || (part.Distance == best.Distance && part.Basis.Index < best.Basis.Index)))
                 {
                     farthest = part;
-                    farthestDistance = distance;
                 }
             }
 
@@ -174,7 +175,9 @@ internal sealed class BasisConverter(FrameOrientation orientation, DerivationIss
             pending.Remove(move.Basis.Index);
             var next = FrameTree.StepTowards(move.Basis, target);
             var moved = Step(move.Value, move.Basis, next);
-            pending[next.Index] = pending.TryGetValue(next.Index, out var there) ? (next, there.Value + moved) : (next, moved);
+            pending[next.Index] = pending.TryGetValue(next.Index, out var there)
+                ? (next, there.Value + moved, there.Distance)
+                : (next, moved, move.Distance - 1);
         }
 
         return pending.TryGetValue(target.Index, out var result) ? result.Value : Vector3Expr.Zero;
