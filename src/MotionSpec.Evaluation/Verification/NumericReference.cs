@@ -19,13 +19,11 @@ internal sealed class NumericReference
     private readonly BoundSpec _spec;
     private readonly int[] _offsets;
     private readonly int _size;
-    private readonly Mat3[] _atSample;
 
     public NumericReference(BoundSpec spec)
     {
         _spec = spec;
         _offsets = new int[spec.Reports.Count];
-        _atSample = new Mat3[spec.Reports.Count];
         foreach (var report in spec.Reports)
         {
             _offsets[report.Index] = _size;
@@ -48,12 +46,8 @@ internal sealed class NumericReference
     {
         var scene = new NumericScene(_spec, state);
         scene.Compute(state.Time);
-        foreach (var report in _spec.Reports)
-        {
-            _atSample[report.Index] = Relative(scene, report);
-        }
-
-        var (value, firsts, seconds) = StepLadder.Estimate((time, buffer) => Probe(scene, time, buffer), state.Time, _size);
+        var atSample = _spec.Reports.Select(report => Relative(scene, report)).ToArray();
+        var (value, firsts, seconds) = StepLadder.Estimate((time, buffer) => Probe(scene, atSample, time, buffer), state.Time, _size);
         scene.Compute(state.Time);
 
         // The vectors are built at every level and the step is chosen per vector: derived quantities such as
@@ -141,7 +135,7 @@ internal sealed class NumericReference
 
     private static Vec3 At(double[] values, int offset) => new(values[offset], values[offset + 1], values[offset + 2]);
 
-    private void Probe(NumericScene scene, double time, double[] buffer)
+    private void Probe(NumericScene scene, Mat3[] atSample, double time, double[] buffer)
     {
         scene.Compute(time);
         foreach (var report in _spec.Reports)
@@ -159,22 +153,22 @@ internal sealed class NumericReference
                 Put(span, 0, observerT * (p - observerOrigin));
                 Put(span, 3, scene.Orientations[moving.Index].Transpose() * (p - movingOrigin));
                 Put(span, 6, observerT * (movingOrigin - observerOrigin));
-                PutOrientation(span[9..], scene, report);
+                PutOrientation(span[9..], scene, report, atSample[report.Index]);
             }
             else
             {
                 Put(span, 0, observerT * (movingOrigin - observerOrigin));
-                PutOrientation(span[3..], scene, report);
+                PutOrientation(span[3..], scene, report, atSample[report.Index]);
             }
         }
     }
 
     /// <summary>The moving frame's axes in the observer's basis (9), then its turn since the sample time (3).</summary>
-    private void PutOrientation(Span<double> span, NumericScene scene, ReportSymbol report)
+    private static void PutOrientation(Span<double> span, NumericScene scene, ReportSymbol report, Mat3 atSample)
     {
         var q = Relative(scene, report);
         q.CopyTo(span);
-        Put(span, 9, (_atSample[report.Index].Transpose() * q).RotationVector());
+        Put(span, 9, (atSample.Transpose() * q).RotationVector());
     }
 
     private static Mat3 Relative(NumericScene scene, ReportSymbol report)
