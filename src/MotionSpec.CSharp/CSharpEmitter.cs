@@ -81,6 +81,7 @@ public static class CSharpEmitter
         w.Line("// Spec: " + CommentText.OneLine(spec.DisplayName));
         w.Line("// Caution: results are only as good as the spec; loads on people and structures must be checked against");
         w.Line("// the applicable codes and standards and by a qualified engineer.");
+        w.Line("// Compiles on .NET 7 or later (C# 10 record structs, Math.SinCos); needs no package.");
         w.Line("#nullable enable");
         w.Line();
         w.Line("namespace " + namespaceName + ";");

@@ -64,8 +64,25 @@ internal static class ReportMethodWriter
         // the name; runtimes without it ignore it.
         w.Line("[global::System.Runtime.CompilerServices.MethodImpl((global::System.Runtime.CompilerServices.MethodImplOptions)512)] // compiled optimised on first call");
         w.Open($"public static {resultType} {method}({number} t, in State s, in Parameters p)");
-        foreach (var temporary in TemporarySchedule.ByLink(program.Temporaries, coordRank))
+        var scheduled = TemporarySchedule.ByLink(program.Temporaries, coordRank);
+        var pairs = SineCosinePairs.Find(scheduled);
+        var written = new HashSet<Sym>();
+        foreach (var temporary in scheduled)
         {
+            if (!written.Add(temporary.Name))
+            {
+                continue;
+            }
+
+            if (pairs.TryGetValue(temporary.Name, out var pair))
+            {
+                written.Add(pair.Sine.Name);
+                written.Add(pair.Cosine.Name);
+                var angle = Print(((Call)pair.Sine.Value).Arguments[0]);
+                w.Line($"var ({pair.Sine.Name.Name}, {pair.Cosine.Name.Name}) = global::System.{(type == NumericType.Float ? "MathF" : "Math")}.SinCos({angle});");
+                continue;
+            }
+
             w.Line($"{number} {temporary.Name.Name} = {Print(temporary.Value)};");
         }
 
