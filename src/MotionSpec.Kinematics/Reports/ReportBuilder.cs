@@ -27,6 +27,14 @@ internal sealed class ReportBuilder(
     public ReportMotion Build(ReportSymbol report)
     {
         var values = report.Kind == ReportKind.Point ? PointReport(report) : FrameReport(report);
+
+        // Vectors that reach the report's basis through a composed rotation matrix all share its entries; a
+        // component simplified on its own would expand them into a form of its own, which every consumer then
+        // computes a second time (the relative term of a six-link arm repeated two matrix entries so).
+        var moving = report.Kind == ReportKind.Point ? report.Via! : report.SubjectFrame;
+        var composed = Math.Max(FrameTree.Distance(moving, report.Basis), FrameTree.Distance(report.SubjectFrame, report.Basis))
+            >= BasisConverter.ComposedPathLength;
+        Expr Tidy(Expr e) => composed ? e : TidyAlone(e);
         var inBasis = values.ToDictionary(p => p.Key, p => p.Value.Map(Tidy));
         if (report.Kind == ReportKind.Point)
         {
@@ -42,7 +50,7 @@ internal sealed class ReportBuilder(
     /// Simplifies a closed form an engineer will read. Long chains are left as composed: their shared structure is
     /// what keeps them linear in size, and hand-style simplification of them costs more than it gives.
     /// </summary>
-    private static Expr Tidy(Expr e) => ExprMetrics.NodeCount(e) <= SimplifyNodeLimit ? Simplifier.Simplify(e) : e;
+    private static Expr TidyAlone(Expr e) => ExprMetrics.NodeCount(e) <= SimplifyNodeLimit ? Simplifier.Simplify(e) : e;
 
     /// <summary>The position of F's origin relative to B's origin, as parts along the tree path.</summary>
     public FrameVector OriginOffset(FrameSymbol frame, FrameSymbol from)
