@@ -14,6 +14,7 @@ public class ChainEvaluatorBenchmarks
 {
     private readonly double[] _output = new double[24];
     private HandWrittenChain _hand = null!;
+    private HandWrittenChain _handPaired = null!;
     private GeneratedChain _generated = null!;
     private double[] _q = [], _qd = [], _qdd = [];
     private double _s, _sd, _sdd;
@@ -29,10 +30,11 @@ public class ChainEvaluatorBenchmarks
         SetupInputs();
         _generated = new GeneratedChain(Links);
         ChainAgreement.Require(_generated, _hand, _q, _qd, _qdd, _s, _sd, _sdd);
+        ChainAgreement.Require(_generated, _handPaired, _q, _qd, _qdd, _s, _sd, _sdd);
         _generated.Set(_q, _qd, _qdd, _s, _sd, _sdd);
     }
 
-    [GlobalSetup(Targets = [nameof(HandWritten), nameof(SinCosOnly), nameof(SinCosPairsOnly)])]
+    [GlobalSetup(Targets = [nameof(HandWritten), nameof(HandWrittenPairedTrig), nameof(SinCosOnly), nameof(SinCosPairsOnly)])]
     public void SetupInputs()
     {
         var random = new Random(20240611 + Links);
@@ -41,6 +43,7 @@ public class ChainEvaluatorBenchmarks
         _qdd = Enumerable.Range(0, Links).Select(_ => (random.NextDouble() * 4) - 2).ToArray();
         (_s, _sd, _sdd) = (random.NextDouble(), random.NextDouble() - 0.5, random.NextDouble() - 0.5);
         _hand = new HandWrittenChain(Links);
+        _handPaired = new HandWrittenChain(Links, pairedTrig: true);
     }
 
     [Benchmark(Description = "generated")]
@@ -54,6 +57,13 @@ public class ChainEvaluatorBenchmarks
     public double HandWritten()
     {
         _hand.Evaluate(_q, _qd, _qdd, _s, _sd, _sdd, ChainSpec.LinkLength, _output);
+        return _output[8];
+    }
+
+    [Benchmark(Description = "hand-written, SinCos")]
+    public double HandWrittenPairedTrig()
+    {
+        _handPaired.Evaluate(_q, _qd, _qdd, _s, _sd, _sdd, ChainSpec.LinkLength, _output);
         return _output[8];
     }
 
