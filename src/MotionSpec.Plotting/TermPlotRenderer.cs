@@ -14,6 +14,9 @@ public static class TermPlotRenderer
     /// <summary>Height of the magnitude panel in pixels (the component panel adds as much again).</summary>
     public const int PanelHeight = 560;
 
+    // A strip under the panels for the caution, so that an image passed around without its table still carries it.
+    private const int FooterHeight = 40;
+
     /// <summary>Renders the plot as the bytes of an SVG (UTF-8) or PNG file.</summary>
     public static byte[] Render(TermPlotData data, PlotImageFormat format)
     {
@@ -93,8 +96,7 @@ public static class TermPlotRenderer
         using var stream = new SKDynamicMemoryWStream();
         using (var canvas = SKSvgCanvas.Create(new SKRect(0, 0, Width, height), stream))
         {
-            canvas.Clear(SKColors.White);
-            multiplot.Render(canvas, new PixelRect(0, Width, height, 0));
+            Draw(canvas, multiplot, height);
         }
 
         using var svg = stream.DetachAsData();
@@ -104,7 +106,34 @@ public static class TermPlotRenderer
 
     private static byte[] RenderPng(Multiplot multiplot, int height)
     {
-        using var image = multiplot.Render(Width, height);
-        return image.GetImageBytes(ImageFormat.Png);
+        using var surface = SKSurface.Create(new SKImageInfo(Width, height)) ?? throw new InvalidOperationException("no raster surface");
+        Draw(surface.Canvas, multiplot, height);
+        using var image = surface.Snapshot();
+        using var png = image.Encode(SKEncodedImageFormat.Png, 100);
+        return png.ToArray();
+    }
+
+    private static void Draw(SKCanvas canvas, Multiplot multiplot, int height)
+    {
+        canvas.Clear(SKColors.White);
+        multiplot.Render(canvas, new PixelRect(0, Width, height - FooterHeight, 0));
+        using var typeface = SKTypeface.FromFamilyName("DejaVu Sans");
+        using var font = new SKFont(typeface, 12);
+        using var paint = new SKPaint { Color = new SKColor(0x33, 0x33, 0x33), IsAntialias = true };
+        var line = height - FooterHeight + 15;
+        foreach (var text in CautionLines)
+        {
+            canvas.DrawText(text, 12, line, SKTextAlign.Left, font, paint);
+            line += 16;
+        }
+    }
+
+    /// <summary>The caution of every table, on two lines that fit the width of the image.</summary>
+    internal static IReadOnlyList<string> CautionLines { get; } = SplitCaution(Evaluation.Output.TableWriter.Caution);
+
+    private static string[] SplitCaution(string caution)
+    {
+        var end = caution.IndexOf(". ", StringComparison.Ordinal);
+        return end < 0 ? [caution] : [caution[..(end + 1)], caution[(end + 2)..]];
     }
 }

@@ -52,6 +52,21 @@ public class SpecPlotTests
     }
 
     [Fact]
+    public void The_image_carries_the_safety_caution_of_the_tables()
+    {
+        var svg = System.Text.Encoding.UTF8.GetString(TermPlotRenderer.Render(
+            Sweep(Specs.SliderOnRod, "sliderInGroundViaRodBasisRod", "0:50ms:3s", "theta'=1.5", "r=0.2", "r'=0.3"), PlotImageFormat.Svg));
+
+        // The two lines together are the whole caution, and each is drawn as text in the image.
+        Assert.Equal(MotionSpec.Evaluation.Output.TableWriter.Caution, string.Join(" ", TermPlotRenderer.CautionLines));
+        Assert.Equal(2, TermPlotRenderer.CautionLines.Count);
+        foreach (var line in TermPlotRenderer.CautionLines)
+        {
+            Assert.Contains(System.Security.SecurityElement.Escape(line), svg, StringComparison.Ordinal);
+        }
+    }
+
+    [Fact]
     public void Png_of_a_spec_shows_the_centripetal_and_coriolis_curves_and_the_components()
     {
         var png = TermPlotRenderer.Render(Sweep(Specs.SliderOnRod, "sliderInGroundViaRodBasisRod", "0:50ms:3s", "theta'=1.5", "r=0.2", "r'=0.3"), PlotImageFormat.Png);
