@@ -13,7 +13,7 @@ namespace MotionSpec.CSharp.Emission;
 /// else: every vector register is lost across a call on the usual calling conventions, so a call among the
 /// arithmetic spills and reloads whatever is live there, while calls done first leave one stack slot per
 /// result and the arithmetic after them runs in registers. (Measured on a 24-link arm: about 5 % faster, and
-/// the scalar moves to and from the stack in the JIT's code fell from 1,104 to 460.)
+/// the scalar loads and stores (vmovsd) in the JIT's x64 code fell from 1,104 to 460.)
 /// </summary>
 internal static class TemporarySchedule
 {
